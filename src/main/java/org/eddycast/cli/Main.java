@@ -1,7 +1,73 @@
 package org.eddycast.cli;
 
-public final class Main {
+import java.io.IOException;
+import java.io.PrintWriter;
+import org.eddycast.engine.ToolVersion;
+import org.eddycast.particles.NumericalBlowupException;
+import org.eddycast.particles.RunCancelledException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The command line: {@code run}, {@code check} and {@code bench}. Exit status 0 when done, 2 for bad input
+ * (a message on standard error, no stack trace), 1 for an internal fault.
+ */
+@Command(name = "eddycast", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        description = "Screening forecasts of tracer spreading in turbulent tanks and channels.",
+        subcommands = {RunCommand.class, CheckCommand.class, BenchCommand.class})
+public final class Main implements Runnable {
+
+    /** Exit status for bad input. */
+    public static final int BAD_INPUT = 2;
+    /** Exit status for an internal fault. */
+    public static final int FAULT = 1;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
     public static void main(String[] args) {
-        System.out.println("eddycast");
+        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line with the given streams and returns the exit status. */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cmd = new CommandLine(new Main());
+        cmd.setOut(out);
+        cmd.setErr(err);
+        cmd.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
+            if (e instanceof IllegalArgumentException || e instanceof IOException
+                    || e instanceof NumericalBlowupException) {
+                err.println("eddycast: " + message(e));
+                return BAD_INPUT;
+            }
+            if (e instanceof RunCancelledException) {
+                err.println("eddycast: cancelled");
+                return FAULT;
+            }
+            err.println("eddycast: internal fault: " + e);
+            e.printStackTrace(err);
+            return FAULT;
+        });
+        return cmd.execute(args);
+    }
+
+    private static String message(Exception e) {
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "no such file: " + e.getMessage();
+        }
+        return e.getMessage() == null ? e.toString() : e.getMessage();
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** The version for --version. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"eddycast " + ToolVersion.get()};
+        }
     }
 }

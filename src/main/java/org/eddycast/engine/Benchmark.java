@@ -1,0 +1,120 @@
+package org.eddycast.engine;
+
+import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.eddycast.field.PowerLawBand;
+import org.eddycast.field.RandomFourierModel;
+import org.eddycast.field.SpectrumTable;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.particles.Integrator;
+import org.eddycast.particles.RunListener;
+import org.eddycast.stats.AxisEstimate;
+
+/**
+ * The standard benchmark workload: 3D, 64 modes, power-law band spectrum with slope -5/3 and |k| in [1, 16],
+ * u' = 1, tau = 1, D0 = 0.01, dt = 0.02, 65,536 particles, 2,000 steps, 64 particles per realization (or one
+ * realization per particle). Work = particles x modes x steps mode-updates. Throughput is the median over
+ * repetitions after one warm-up run; the answer (diffusivity averaged over the axes) is printed beside it.
+ */
+public final class Benchmark {
+
+    /** One measured configuration. */
+    public record Figure(String integrator, String sharing, int threads, double modeUpdatesPerSecond,
+                         long peakMemoryBytes, double diffusivity, double low, double high, double medianSeconds) {
+    }
+
+    /** Workload size. */
+    public record Workload(int particles, int steps, int modes, int repetitions) {
+        /** The standard workload of the design notes. */
+        public static Workload standard() {
+            return new Workload(65_536, 2_000, 64, 3);
+        }
+
+        /** A reduced workload that runs in seconds. */
+        public static Workload quick() {
+            return new Workload(8_192, 400, 64, 3);
+        }
+    }
+
+    private Benchmark() {
+    }
+
+    /** The dimensionless case of the workload with the given integrator and group size. */
+    public static DimensionlessCase workload(Workload w, Integrator integrator, int groupSize, long seed) {
+        SpectrumTable table = new SpectrumTable(new PowerLawBand(-5.0 / 3.0, 16), 3, w.modes());
+        // The table works in units of the integral length; the workload states |k| in [1, 16] and u' = 1, so its
+        // length unit is the shape's integral length and tau = 1 is tau = 1 / L11 in table units.
+        double l11 = table.shapeIntegralLength();
+        Scales scales = new Scales(l11, 1.0);
+        double tau = 1.0 / scales.time();
+        RandomFourierModel model = new RandomFourierModel(table, tau, "power law k^-5/3, |k| in [1, 16]");
+        double d0 = 0.01 / scales.diffusivity();
+        return new DimensionlessCase(model, integrator, new double[] {d0, d0, d0}, 0.02 / scales.time(), w.steps(),
+                groupSize, w.particles(), w.particles(), Double.NaN, seed, scales, tau, 1 / d0, List.of(),
+                "benchmark");
+    }
+
+    /** Measures one configuration. */
+    public static Figure measure(Workload w, Integrator integrator, boolean shared, int threads) {
+        int group = shared ? 64 : 1;
+        DimensionlessCase c = workload(w, integrator, group, 1);
+        DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+        double[] seconds = new double[w.repetitions()];
+        DiffusivityResult last = null;
+        for (int i = 0; i < seconds.length; i++) {
+            last = DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+            seconds[i] = last.elapsedSeconds();
+        }
+        Arrays.sort(seconds);
+        double median = seconds[seconds.length / 2];
+        double work = (double) last.particles() * w.modes() * w.steps();
+        double value = 0;
+        double low = 0;
+        double high = 0;
+        for (AxisEstimate a : last.axes()) {
+            value += a.diffusivity().value() / 3;
+            low += a.diffusivity().low() / 3;
+            high += a.diffusivity().high() / 3;
+        }
+        return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median, peakMemoryBytes(),
+                value, low, high, median);
+    }
+
+    /** Peak resident memory of this process (Linux VmHWM), or the sum of the JVM pools' peaks elsewhere. */
+    public static long peakMemoryBytes() {
+        try {
+            for (String line : Files.readAllLines(Path.of("/proc/self/status"))) {
+                if (line.startsWith("VmHWM:")) {
+                    String[] parts = line.trim().split("\\s+");
+                    return Long.parseLong(parts[1]) * 1024L;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // fall through to the JVM's own figures
+        }
+        long sum = 0;
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            sum += pool.getPeakUsage().getUsed();
+        }
+        return sum;
+    }
+
+    /** Every integrator, shared and own realizations. */
+    public static List<Figure> all(Workload w, int threads, java.util.function.Consumer<Figure> each) {
+        List<Figure> figures = new ArrayList<>();
+        for (boolean shared : new boolean[] {true, false}) {
+            for (Integrator i : Integrator.values()) {
+                Figure f = measure(w, i, shared, threads);
+                each.accept(f);
+                figures.add(f);
+            }
+        }
+        return figures;
+    }
+}

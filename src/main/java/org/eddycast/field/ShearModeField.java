@@ -1,0 +1,304 @@
+package org.eddycast.field;
+
+import java.util.random.RandomGenerator;
+
+/**
+ * One realization of a velocity field that is a finite sum of shear modes,
+ * u(x, t) = sum_m [ a_m(t) cos(k_m . x) + b_m(t) sin(k_m . x) ], with a_m and b_m normal to k_m.
+ *
+ * <p>Each term moves a point along a direction normal to k_m and leaves k_m . x unchanged, so the field is
+ * divergence-free and one term's flow over a time h with its amplitudes held fixed is exact:
+ * x &lt;- x + h (a cos(k.x) + b sin(k.x)), a map with unit Jacobian determinant. Random Fourier fields
+ * (Kraichnan 1970, "Diffusion by a random velocity field", Phys. Fluids 13:22-31) and the periodic
+ * verification flows are both of this form.
+ *
+ * <p>The amplitudes are a_m = alpha1 e1 + alpha2 e2 and b_m = beta1 e1 + beta2 e2 on an orthonormal basis
+ * (e1, e2) of the plane normal to k_m (a single vector e1 where one polarization is used). Each coefficient
+ * is an Ornstein-Uhlenbeck process with stationary standard deviation sigma_m and correlation time tau_m,
+ * advanced by its exact transition z &lt;- z exp(-dt/tau) + sigma sqrt(1 - exp(-2 dt/tau)) xi
+ * (Uhlenbeck and Ornstein 1930, "On the theory of the Brownian motion", Phys. Rev. 36:823-841); an infinite
+ * tau or a zero sigma holds a coefficient fixed.
+ *
+ * <p>A mutable workspace owned by one thread: the particle kernels read its arrays directly.
+ */
+public final class ShearModeField {
+
+    private final int dimensions;
+    private final int modes;
+    final double[] kx;
+    final double[] ky;
+    final double[] kz;
+    final double[] ax;
+    final double[] ay;
+    final double[] az;
+    final double[] bx;
+    final double[] by;
+    final double[] bz;
+    private final double[] e1x;
+    private final double[] e1y;
+    private final double[] e1z;
+    private final double[] e2x;
+    private final double[] e2y;
+    private final double[] e2z;
+    private final double[] alpha1;
+    private final double[] alpha2;
+    private final double[] beta1;
+    private final double[] beta2;
+    private final double[] sigma;
+    private final double[] correlationTime;
+    private final double[] decay;
+    private final double[] kick;
+    private final boolean[] twoPolarizations;
+    private boolean anyRandomInTime;
+
+    public ShearModeField(int dimensions, int modes) {
+        if (dimensions != 2 && dimensions != 3) {
+            throw new IllegalArgumentException("dimensions must be 2 or 3; got " + dimensions);
+        }
+        if (modes < 1) {
+            throw new IllegalArgumentException("mode count must be at least 1; got " + modes);
+        }
+        this.dimensions = dimensions;
+        this.modes = modes;
+        kx = new double[modes];
+        ky = new double[modes];
+        kz = new double[modes];
+        ax = new double[modes];
+        ay = new double[modes];
+        az = new double[modes];
+        bx = new double[modes];
+        by = new double[modes];
+        bz = new double[modes];
+        e1x = new double[modes];
+        e1y = new double[modes];
+        e1z = new double[modes];
+        e2x = new double[modes];
+        e2y = new double[modes];
+        e2z = new double[modes];
+        alpha1 = new double[modes];
+        alpha2 = new double[modes];
+        beta1 = new double[modes];
+        beta2 = new double[modes];
+        sigma = new double[modes];
+        correlationTime = new double[modes];
+        decay = new double[modes];
+        kick = new double[modes];
+        twoPolarizations = new boolean[modes];
+    }
+
+    public int dimensions() {
+        return dimensions;
+    }
+
+    public int modes() {
+        return modes;
+    }
+
+    /**
+     * Sets mode m's wavevector and polarization basis. e2 may be null for a single polarization.
+     * The basis vectors must be unit vectors normal to k (the caller's duty; checked by the field tests).
+     *
+     * @param sigma stationary standard deviation of each coefficient (0 for a steady mode)
+     * @param tau   correlation time of the coefficients; {@link Double#POSITIVE_INFINITY} holds them fixed
+     */
+    public void setMode(int m, double[] k, double[] e1, double[] e2, double sigma, double tau) {
+        kx[m] = k[0];
+        ky[m] = k[1];
+        kz[m] = dimensions == 3 ? k[2] : 0.0;
+        e1x[m] = e1[0];
+        e1y[m] = e1[1];
+        e1z[m] = dimensions == 3 ? e1[2] : 0.0;
+        twoPolarizations[m] = e2 != null;
+        e2x[m] = e2 == null ? 0 : e2[0];
+        e2y[m] = e2 == null ? 0 : e2[1];
+        e2z[m] = e2 == null || dimensions == 2 ? 0 : e2[2];
+        this.sigma[m] = sigma;
+        this.correlationTime[m] = tau;
+        alpha1[m] = 0;
+        alpha2[m] = 0;
+        beta1[m] = 0;
+        beta2[m] = 0;
+    }
+
+    /** Sets the coefficients of mode m directly (steady flows). */
+    public void setCoefficients(int m, double alpha1, double alpha2, double beta1, double beta2) {
+        this.alpha1[m] = alpha1;
+        this.alpha2[m] = twoPolarizations[m] ? alpha2 : 0.0;
+        this.beta1[m] = beta1;
+        this.beta2[m] = twoPolarizations[m] ? beta2 : 0.0;
+    }
+
+    /** Draws every random coefficient from its stationary normal law N(0, sigma^2). */
+    public void drawStationaryCoefficients(RandomGenerator rng) {
+        for (int m = 0; m < modes; m++) {
+            double s = sigma[m];
+            alpha1[m] = s * rng.nextGaussian();
+            beta1[m] = s * rng.nextGaussian();
+            if (twoPolarizations[m]) {
+                alpha2[m] = s * rng.nextGaussian();
+                beta2[m] = s * rng.nextGaussian();
+            }
+        }
+    }
+
+    /** Prepares the exact Ornstein-Uhlenbeck transition for steps of length dt and refreshes the amplitudes. */
+    public void prepareStep(double dt) {
+        anyRandomInTime = false;
+        for (int m = 0; m < modes; m++) {
+            double tau = correlationTime[m];
+            if (Double.isInfinite(tau) || sigma[m] == 0) {
+                decay[m] = 1.0;
+                kick[m] = 0.0;
+            } else {
+                double rho = Math.exp(-dt / tau);
+                decay[m] = rho;
+                kick[m] = sigma[m] * Math.sqrt(-Math.expm1(-2 * dt / tau));
+                anyRandomInTime = true;
+            }
+        }
+        refreshAmplitudes();
+    }
+
+    /** Advances every time-correlated coefficient by one prepared step and refreshes the amplitudes. */
+    public void advanceAmplitudes(RandomGenerator rng) {
+        if (!anyRandomInTime) {
+            return;
+        }
+        for (int m = 0; m < modes; m++) {
+            double k = kick[m];
+            if (k == 0) {
+                continue;
+            }
+            double rho = decay[m];
+            alpha1[m] = rho * alpha1[m] + k * rng.nextGaussian();
+            beta1[m] = rho * beta1[m] + k * rng.nextGaussian();
+            if (twoPolarizations[m]) {
+                alpha2[m] = rho * alpha2[m] + k * rng.nextGaussian();
+                beta2[m] = rho * beta2[m] + k * rng.nextGaussian();
+            }
+        }
+        refreshAmplitudes();
+    }
+
+    private void refreshAmplitudes() {
+        for (int m = 0; m < modes; m++) {
+            ax[m] = alpha1[m] * e1x[m] + alpha2[m] * e2x[m];
+            ay[m] = alpha1[m] * e1y[m] + alpha2[m] * e2y[m];
+            az[m] = alpha1[m] * e1z[m] + alpha2[m] * e2z[m];
+            bx[m] = beta1[m] * e1x[m] + beta2[m] * e2x[m];
+            by[m] = beta1[m] * e1y[m] + beta2[m] * e2y[m];
+            bz[m] = beta1[m] * e1z[m] + beta2[m] * e2z[m];
+        }
+    }
+
+    /**
+     * Applies mode m's exact shear map for time h to points 0..n-1.
+     * The scratch arrays must hold at least n values; z is ignored in two dimensions.
+     */
+    public void shear(int m, double h, double[] x, double[] y, double[] z, int n,
+                      double[] phase, double[] sin, double[] cos) {
+        double k1 = kx[m];
+        double k2 = ky[m];
+        double k3 = kz[m];
+        if (dimensions == 3) {
+            for (int i = 0; i < n; i++) {
+                phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
+            }
+        } else {
+            for (int i = 0; i < n; i++) {
+                phase[i] = k1 * x[i] + k2 * y[i];
+            }
+        }
+        FastSinCos.sinCos(phase, sin, cos, n);
+        double hax = h * ax[m];
+        double hay = h * ay[m];
+        double hbx = h * bx[m];
+        double hby = h * by[m];
+        for (int i = 0; i < n; i++) {
+            x[i] += hax * cos[i] + hbx * sin[i];
+            y[i] += hay * cos[i] + hby * sin[i];
+        }
+        if (dimensions == 3) {
+            double haz = h * az[m];
+            double hbz = h * bz[m];
+            for (int i = 0; i < n; i++) {
+                z[i] += haz * cos[i] + hbz * sin[i];
+            }
+        }
+    }
+
+    /** Adds the velocity of all modes at points 0..n-1 to (vx, vy, vz). */
+    public void addVelocity(double[] x, double[] y, double[] z, int n, double[] vx, double[] vy, double[] vz,
+                            double[] phase, double[] sin, double[] cos) {
+        for (int m = 0; m < modes; m++) {
+            double k1 = kx[m];
+            double k2 = ky[m];
+            double k3 = kz[m];
+            if (dimensions == 3) {
+                for (int i = 0; i < n; i++) {
+                    phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
+                }
+            } else {
+                for (int i = 0; i < n; i++) {
+                    phase[i] = k1 * x[i] + k2 * y[i];
+                }
+            }
+            FastSinCos.sinCos(phase, sin, cos, n);
+            double a1 = ax[m];
+            double a2 = ay[m];
+            double b1 = bx[m];
+            double b2 = by[m];
+            for (int i = 0; i < n; i++) {
+                vx[i] += a1 * cos[i] + b1 * sin[i];
+                vy[i] += a2 * cos[i] + b2 * sin[i];
+            }
+            if (dimensions == 3) {
+                double a3 = az[m];
+                double b3 = bz[m];
+                for (int i = 0; i < n; i++) {
+                    vz[i] += a3 * cos[i] + b3 * sin[i];
+                }
+            }
+        }
+    }
+
+    /** The velocity at one point by plain {@link Math#sin}/{@link Math#cos}: a reference for tests. */
+    public void velocityAt(double[] point, double[] out) {
+        out[0] = 0;
+        out[1] = 0;
+        if (dimensions == 3) {
+            out[2] = 0;
+        }
+        for (int m = 0; m < modes; m++) {
+            double p = kx[m] * point[0] + ky[m] * point[1] + (dimensions == 3 ? kz[m] * point[2] : 0.0);
+            double c = Math.cos(p);
+            double s = Math.sin(p);
+            out[0] += ax[m] * c + bx[m] * s;
+            out[1] += ay[m] * c + by[m] * s;
+            if (dimensions == 3) {
+                out[2] += az[m] * c + bz[m] * s;
+            }
+        }
+    }
+
+    /** Mode m's wavevector, copied into out. */
+    public void wavevector(int m, double[] out) {
+        out[0] = kx[m];
+        out[1] = ky[m];
+        if (dimensions == 3) {
+            out[2] = kz[m];
+        }
+    }
+
+    /** Mode m's current cos and sin amplitudes, copied into a and b. */
+    public void amplitudes(int m, double[] a, double[] b) {
+        a[0] = ax[m];
+        a[1] = ay[m];
+        b[0] = bx[m];
+        b[1] = by[m];
+        if (dimensions == 3) {
+            a[2] = az[m];
+            b[2] = bz[m];
+        }
+    }
+}

@@ -1,0 +1,215 @@
+package org.eddycast.particles;
+
+import java.util.Locale;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.random.RandomGenerator;
+import java.util.stream.IntStream;
+import org.eddycast.field.FieldModel;
+import org.eddycast.field.ShearModeField;
+import org.eddycast.stats.DisplacementMoments;
+
+/**
+ * Runs an ensemble of particles through realizations of a field and accumulates the mean-square displacement
+ * per axis, block by block.
+ *
+ * <p>Particles come in groups that share one realization; groups make up blocks of at least
+ * {@value #MIN_BLOCK} particles, the independent units of the confidence interval. A block is advanced through
+ * all its steps while its few kilobytes sit in cache and leaves only its curve of mean-square displacements at
+ * the record times, so memory does not grow with the number of steps or particles. Blocks run in parallel in
+ * batches of {@value #BATCH}; each has its own random stream ({@link BlockStreams}) and the batch's curves are
+ * merged in block order, so the result is the same, bit for bit, for any thread count.
+ */
+public final class EnsembleRunner {
+
+    static final int MIN_BLOCK = 64;
+    static final int BATCH = 16;
+
+    private final FieldModel model;
+    private final Integrator integrator;
+    private final double dt;
+    private final int steps;
+    private final int groupSize;
+    private final int blockSize;
+    private final double[] d0;
+    private final BlockStreams streams;
+    private final RecordSchedule schedule;
+    private final DisplacementMoments moments;
+    private long blocksDone;
+
+    /**
+     * @param model      the field
+     * @param integrator the drift scheme
+     * @param dt         time step (dimensionless)
+     * @param steps      number of steps, at least 2
+     * @param groupSize  particles sharing one realization, at least 1
+     * @param d0         molecular diffusivity per axis (length 3, dimensionless)
+     * @param seed       the run's seed
+     */
+    public EnsembleRunner(FieldModel model, Integrator integrator, double dt, int steps, int groupSize,
+                          double[] d0, long seed) {
+        if (!(dt > 0) || !Double.isFinite(dt)) {
+            throw new IllegalArgumentException("time step must be positive; got " + dt);
+        }
+        if (groupSize < 1) {
+            throw new IllegalArgumentException("group size must be at least 1; got " + groupSize);
+        }
+        this.model = model;
+        this.integrator = integrator;
+        this.dt = dt;
+        this.steps = steps;
+        this.groupSize = groupSize;
+        this.blockSize = groupSize >= MIN_BLOCK ? groupSize : groupSize * ((MIN_BLOCK + groupSize - 1) / groupSize);
+        this.d0 = d0.clone();
+        this.streams = new BlockStreams(seed);
+        this.schedule = RecordSchedule.forSteps(steps);
+        this.moments = new DisplacementMoments(model.dimensions(), schedule.times(dt), blockSize);
+    }
+
+    /** Particles per block (a whole number of groups). */
+    public int blockSize() {
+        return blockSize;
+    }
+
+    public long blocksDone() {
+        return blocksDone;
+    }
+
+    public int steps() {
+        return steps;
+    }
+
+    /** A snapshot of the moments merged so far. */
+    public DisplacementMoments moments() {
+        return moments.copy();
+    }
+
+    /**
+     * Runs the next {@code count} blocks on {@code threads} workers and merges them.
+     *
+     * @throws RunCancelledException     when cancelled (the blocks of the unfinished batch are dropped)
+     * @throws NumericalBlowupException  when positions stop being finite
+     */
+    public void runBlocks(long count, int threads, RunListener listener, Cancellation cancel) {
+        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
+        try {
+            AtomicLong groupSteps = new AtomicLong();
+            double totalGroupSteps = (double) count * (blockSize / groupSize) * steps;
+            long end = blocksDone + count;
+            while (blocksDone < end) {
+                int batch = (int) Math.min(BATCH, end - blocksDone);
+                long first = blocksDone;
+                double[][] curves = new double[batch][];
+                Future<?> future = pool.submit(() -> IntStream.range(0, batch).parallel()
+                        .forEach(i -> curves[i] = runBlock(first + i, cancel, groupSteps)));
+                awaitBatch(future, cancel, listener, groupSteps, totalGroupSteps);
+                for (double[] curve : curves) {
+                    moments.increment(curve);
+                }
+                blocksDone += batch;
+                listener.progress(Math.min(1.0, groupSteps.get() / totalGroupSteps), moments.copy());
+            }
+        } finally {
+            pool.shutdownNow();
+            try {
+                pool.awaitTermination(10, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }
+    }
+
+    private static void awaitBatch(Future<?> future, Cancellation cancel, RunListener listener, AtomicLong done,
+                                   double total) {
+        while (true) {
+            try {
+                future.get(200, TimeUnit.MILLISECONDS);
+                return;
+            } catch (TimeoutException e) {
+                listener.progress(Math.min(1.0, done.get() / total), null);
+            } catch (InterruptedException e) {
+                cancel.cancel();
+                Thread.currentThread().interrupt();
+                throw new RunCancelledException();
+            } catch (ExecutionException e) {
+                Throwable cause = e.getCause();
+                if (cause instanceof RuntimeException re) {
+                    throw re;
+                }
+                throw new IllegalStateException(cause);
+            }
+        }
+    }
+
+    /** Advances block b through all its groups and steps; returns its mean-square displacement curves. */
+    double[] runBlock(long b, Cancellation cancel, AtomicLong groupSteps) {
+        RandomGenerator rng = streams.forBlock(b);
+        int axes = model.dimensions();
+        int records = schedule.size();
+        double[] curve = new double[axes * records];
+        ShearModeField field = new ShearModeField(axes, model.modeCount());
+        ParticleBlock particles = new ParticleBlock(groupSize);
+        ParticleStepper stepper = new ParticleStepper(integrator, dt, d0);
+        double region = model.startRegion();
+        double[] start = new double[3];
+        for (int g = 0; g < blockSize / groupSize; g++) {
+            model.realize(field, rng);
+            field.prepareStep(dt);
+            for (int i = 0; i < groupSize; i++) {
+                start[0] = region * rng.nextDouble();
+                start[1] = region * rng.nextDouble();
+                start[2] = axes == 3 ? region * rng.nextDouble() : 0.0;
+                particles.place(i, start);
+            }
+            int record = 0;
+            for (int s = 1; s <= steps; s++) {
+                if (cancel.isCancelled()) {
+                    throw new RunCancelledException();
+                }
+                stepper.step(field, particles, groupSize, rng);
+                if (s == schedule.step(record)) {
+                    accumulate(particles, curve, record, records, axes, s);
+                    record++;
+                }
+                if ((s & 63) == 0) {
+                    groupSteps.addAndGet(64);
+                }
+            }
+            groupSteps.addAndGet(steps & 63);
+        }
+        double inverse = 1.0 / blockSize;
+        for (int j = 0; j < curve.length; j++) {
+            curve[j] *= inverse;
+        }
+        return curve;
+    }
+
+    private void accumulate(ParticleBlock p, double[] curve, int record, int records, int axes, int step) {
+        double sx = 0;
+        double sy = 0;
+        double sz = 0;
+        for (int i = 0; i < groupSize; i++) {
+            double dx = p.x[i] - p.x0[i];
+            double dy = p.y[i] - p.y0[i];
+            double dz = p.z[i] - p.z0[i];
+            sx += dx * dx;
+            sy += dy * dy;
+            sz += dz * dz;
+        }
+        if (!Double.isFinite(sx + sy + sz)) {
+            throw new NumericalBlowupException(String.format(Locale.ROOT,
+                    "particle positions stopped being finite numbers at step %d (time %.4g in units of the "
+                            + "flow's time scale): the time step %.4g is far too large for this flow; use a time "
+                            + "step below %.3g", step, step * dt, dt, 0.1 * model.shortestTimeScale()));
+        }
+        curve[record] += sx;
+        curve[records + record] += sy;
+        if (axes == 3) {
+            curve[2 * records + record] += sz;
+        }
+    }
+}

@@ -1,0 +1,91 @@
+package org.eddycast.particles;
+
+import java.util.Locale;
+import org.eddycast.field.ShearModeField;
+
+/**
+ * The drift part of one time step for particles in a sum of shear modes, with the amplitudes held at their
+ * values at the start of the step. The Brownian step and the amplitude update follow in the
+ * {@link ParticleStepper}.
+ *
+ * <p>The splitting schemes compose the exact flows of the single modes: each substep is a shear with unit
+ * Jacobian determinant, so volume is preserved to round-off (McLachlan and Quispel 2002, "Splitting methods",
+ * Acta Numerica 11:341-434). Lie applies the modes once in order (first order); Strang applies them forward
+ * with half steps and back with half steps, the middle mode merged into one full step (second order in the
+ * drift, 2M - 1 shears per step). Euler-Maruyama evaluates the full velocity at the start point and is kept
+ * as a baseline (Kloeden and Platen 1992, Numerical Solution of Stochastic Differential Equations, Springer).
+ */
+public enum Integrator {
+
+    EULER_MARUYAMA("euler") {
+        @Override
+        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
+            java.util.Arrays.fill(p.vx, 0, n, 0.0);
+            java.util.Arrays.fill(p.vy, 0, n, 0.0);
+            java.util.Arrays.fill(p.vz, 0, n, 0.0);
+            field.addVelocity(p.x, p.y, p.z, n, p.vx, p.vy, p.vz, p.phase, p.sin, p.cos);
+            for (int i = 0; i < n; i++) {
+                p.x[i] += dt * p.vx[i];
+                p.y[i] += dt * p.vy[i];
+            }
+            if (field.dimensions() == 3) {
+                for (int i = 0; i < n; i++) {
+                    p.z[i] += dt * p.vz[i];
+                }
+            }
+        }
+    },
+
+    LIE("lie") {
+        @Override
+        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
+            for (int m = 0; m < field.modes(); m++) {
+                field.shear(m, dt, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+            }
+        }
+    },
+
+    STRANG("strang") {
+        @Override
+        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
+            int last = field.modes() - 1;
+            double half = 0.5 * dt;
+            for (int m = 0; m < last; m++) {
+                field.shear(m, half, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+            }
+            field.shear(last, dt, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+            for (int m = last - 1; m >= 0; m--) {
+                field.shear(m, half, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+            }
+        }
+    };
+
+    private final String key;
+
+    Integrator(String key) {
+        this.key = key;
+    }
+
+    /** The name used in scenario files and on the command line. */
+    public String key() {
+        return key;
+    }
+
+    /** True for the schemes whose every substep preserves volume. */
+    public boolean volumePreserving() {
+        return this != EULER_MARUYAMA;
+    }
+
+    /** The integrator for a scenario-file name, or null if there is none. */
+    public static Integrator fromKey(String key) {
+        for (Integrator i : values()) {
+            if (i.key.equals(key.toLowerCase(Locale.ROOT))) {
+                return i;
+            }
+        }
+        return null;
+    }
+
+    /** Advances the first n particles of the block by the drift over dt. */
+    abstract void drift(ShearModeField field, ParticleBlock p, int n, double dt);
+}

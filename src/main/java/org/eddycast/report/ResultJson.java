@@ -1,0 +1,137 @@
+package org.eddycast.report;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.eddycast.engine.DiffusivityResult;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.scenario.Derivation;
+import org.eddycast.scenario.TurbulenceStatistics;
+import org.eddycast.stats.AxisEstimate;
+import org.eddycast.stats.SlopeEstimate;
+
+/** The result of a study as JSON, in SI units. */
+public final class ResultJson {
+
+    static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ResultJson() {
+    }
+
+    /** The result as a JSON tree. */
+    public static ObjectNode of(StudyResult study) {
+        DiffusivityResult r = study.diffusivity();
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("tool", "eddycast");
+        root.put("toolVersion", study.toolVersion());
+        root.put("scenario", study.scenario().name());
+        root.put("finished", study.finished().toString());
+        root.put("seed", study.scenario().simulation().seed());
+        ObjectNode eddy = root.putObject("eddyDiffusivity");
+        eddy.put("unit", "m^2/s");
+        eddy.put("interval", "95% Student-t over independent blocks");
+        ObjectNode tl = MAPPER.createObjectNode();
+        for (AxisEstimate a : r.axes()) {
+            SlopeEstimate e = a.diffusivity();
+            ObjectNode axis = eddy.putObject(a.axisName());
+            number(axis, "value", e.value());
+            number(axis, "low", e.low());
+            number(axis, "high", e.high());
+            number(axis, "standardError", e.standardError());
+            axis.put("settled", a.settled());
+            number(tl, a.axisName(), a.lagrangianTimeScale());
+        }
+        ObjectNode lagrangian = root.putObject("lagrangianTimeScale");
+        lagrangian.put("unit", "s");
+        lagrangian.setAll(tl);
+        ObjectNode dimensionless = root.putObject("dimensionless");
+        number(dimensionless, "kubo", r.kubo());
+        number(dimensionless, "peclet", r.peclet());
+        number(root, "molecularDiffusivity", r.molecularDiffusivity());
+        if (study.turbulence() != null) {
+            root.set("turbulence", turbulence(study.turbulence()));
+        }
+        ObjectNode run = root.putObject("run");
+        run.put("field", r.fieldDescription());
+        run.put("integrator", study.scenario().simulation().integrator().key());
+        run.put("particles", r.particles());
+        run.put("blocks", r.blocks());
+        run.put("steps", r.steps());
+        number(run, "timeStep", r.timeStep());
+        number(run, "duration", r.duration());
+        run.put("threads", r.threads());
+        number(run, "elapsedSeconds", r.elapsedSeconds());
+        run.put("fromCache", r.fromCache());
+        ArrayNode warnings = root.putArray("warnings");
+        r.warnings().forEach(warnings::add);
+        ArrayNode notes = root.putArray("notes");
+        r.notes().forEach(notes::add);
+        root.set("meanSquareDisplacement", curve(r));
+        return root;
+    }
+
+    /** The result as indented JSON text. */
+    public static String text(StudyResult study) {
+        try {
+            return MAPPER.writeValueAsString(of(study));
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    static ObjectNode turbulence(TurbulenceStatistics t) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("dimensions", t.dimensions());
+        number(node, "rmsVelocity", t.rmsVelocity());
+        ArrayNode rms = node.putArray("componentRms");
+        for (double v : t.componentRms()) {
+            rms.add(v);
+        }
+        number(node, "integralLength", t.integralLength());
+        number(node, "correlationTime", t.correlationTime());
+        number(node, "meanVelocity", t.meanVelocity());
+        number(node, "dissipationRate", t.dissipationRate());
+        ObjectNode spectrum = node.putObject("spectrum");
+        spectrum.put("model", t.spectrum().model().key());
+        number(spectrum, "slope", t.spectrum().slope());
+        number(spectrum, "wavenumberRatio", t.spectrum().wavenumberRatio());
+        number(spectrum, "kolmogorovLength", t.spectrum().kolmogorovLength());
+        ArrayNode rules = node.putArray("derivations");
+        for (Derivation d : t.derivations()) {
+            ObjectNode rule = rules.addObject();
+            rule.put("quantity", d.quantity());
+            number(rule, "value", d.value());
+            rule.put("unit", d.unit());
+            rule.put("rule", d.rule());
+            rule.put("source", d.source());
+        }
+        return node;
+    }
+
+    private static ObjectNode curve(DiffusivityResult r) {
+        ObjectNode node = MAPPER.createObjectNode();
+        node.put("unit", "m^2 (time in s)");
+        ArrayNode times = node.putArray("time");
+        for (double t : r.times()) {
+            times.add(t);
+        }
+        String[] names = {"x", "y", "z"};
+        for (int a = 0; a < r.axes().size(); a++) {
+            ArrayNode values = node.putArray(names[a]);
+            for (double v : r.meanSquareDisplacement(a)) {
+                values.add(v);
+            }
+        }
+        return node;
+    }
+
+    /** JSON has no NaN or infinity: those become null. */
+    static void number(ObjectNode node, String field, double value) {
+        if (Double.isFinite(value)) {
+            node.put(field, value);
+        } else {
+            node.putNull(field);
+        }
+    }
+}

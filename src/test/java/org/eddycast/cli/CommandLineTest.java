@@ -1,0 +1,68 @@
+package org.eddycast.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The command line's contract: outputs, exit status, messages. */
+class CommandLineTest {
+
+    record Outcome(int status, String out, String err) {
+    }
+
+    static Outcome run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return new Outcome(status, out.toString(), err.toString());
+    }
+
+    @Test
+    void runWritesTheDocumentedJson(@TempDir Path dir) throws Exception {
+        Path scenario = dir.resolve("s.json");
+        Files.writeString(scenario, Files.readString(Path.of("presets/verify-shear-flow.json"))
+                .replace("\"particles\": 32768", "\"particles\": 2048"));
+        Path json = dir.resolve("out.json");
+        Path csv = dir.resolve("out.csv");
+        Outcome o = run("run", scenario.toString(), "--json", json.toString(), "--csv", csv.toString(),
+                "--threads", "2");
+        assertEquals(0, o.status(), o.err());
+        assertTrue(o.out().contains("eddy diffusivity"), o.out());
+        JsonNode root = new ObjectMapper().readTree(json.toFile());
+        for (String axis : new String[] {"x", "y"}) {
+            JsonNode a = root.path("eddyDiffusivity").path(axis);
+            assertTrue(a.path("low").asDouble() < a.path("value").asDouble());
+            assertTrue(a.path("value").asDouble() < a.path("high").asDouble());
+        }
+        assertTrue(root.path("lagrangianTimeScale").has("x"));
+        assertTrue(root.path("dimensionless").has("kubo"));
+        assertTrue(root.path("dimensionless").has("peclet"));
+        assertTrue(root.path("warnings").isArray());
+        assertTrue(Files.readString(csv).startsWith("time_s,msd_x_m2"));
+    }
+
+    @Test
+    void badInputExitsTwoWithAMessageAndNoStackTrace(@TempDir Path dir) throws Exception {
+        Path scenario = dir.resolve("bad.json");
+        Files.writeString(scenario, "{ \"version\": 1, \"flow\": { \"kind\": \"direct\", \"rmsVelocity\": 0 },"
+                + " \"substance\": { \"molecularDiffusivity\": 1e-9 } }");
+        Outcome o = run("run", scenario.toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("flow.rmsVelocity must be between 0 (exclusive) and 100 m/s; got 0"), o.err());
+        assertTrue(o.err().contains("flow.integralLength is missing"), o.err());
+        assertTrue(!o.err().contains("\tat "), "no stack trace: " + o.err());
+        Outcome missing = run("run", dir.resolve("nothere.json").toString());
+        assertEquals(2, missing.status());
+        assertTrue(missing.err().contains("no such file"), missing.err());
+        assertEquals(2, run("run").status());
+        assertEquals(2, run("run", scenario.toString(), "--threads", "0").status());
+    }
+}

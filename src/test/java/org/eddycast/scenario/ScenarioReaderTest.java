@@ -1,0 +1,79 @@
+package org.eddycast.scenario;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.eddycast.particles.Integrator;
+import org.junit.jupiter.api.Test;
+
+class ScenarioReaderTest {
+
+    static final String EXAMPLE = """
+            { "version": 1, "name": "example",
+              "flow": { "kind": "direct", "dimensions": 3, "rmsVelocity": 0.05, "integralLength": 0.3,
+                        "correlationTime": 6.0, "spectrum": { "model": "power-law", "slope": -1.6667, "wavenumberRatio": 16 } },
+              "substance": { "molecularDiffusivity": 1.0e-9 },
+              "simulation": { "particles": 16384, "groupSize": 64, "modes": 64, "integrator": "strang",
+                              "timeStep": 0.05, "duration": 120, "seed": 7 } }
+            """;
+
+    @Test
+    void readsTheDocumentedShape() {
+        Scenario s = ScenarioReader.parse(EXAMPLE);
+        DirectFlow f = (DirectFlow) s.flow();
+        assertEquals(0.05, f.rmsVelocity());
+        assertEquals(0.3, f.integralLength());
+        assertEquals(6.0, f.correlationTime());
+        assertEquals(-1.6667, f.spectrum().slope());
+        assertEquals(16, f.spectrum().wavenumberRatio());
+        assertEquals(1e-9, s.substance().molecularDiffusivity());
+        assertEquals(Integrator.STRANG, s.simulation().integrator());
+        assertEquals(2400, s.simulation().steps());
+        assertEquals(7, s.simulation().seed());
+    }
+
+    @Test
+    void everyProblemNamesItsFieldAndTheValidRange() {
+        String bad = EXAMPLE.replace("\"rmsVelocity\": 0.05", "\"rmsVelocity\": -1")
+                .replace("\"integrator\": \"strang\"", "\"integrator\": \"rk4\"")
+                .replace("\"particles\": 16384", "\"particles\": \"many\"");
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioReader.parse(bad));
+        assertEquals(3, e.problems().size(), e.getMessage());
+        assertTrue(e.getMessage().contains("flow.rmsVelocity must be between 0 (exclusive) and 100 m/s; got -1"), e.getMessage());
+        assertTrue(e.getMessage().contains("simulation.integrator must be one of euler, lie, strang"), e.getMessage());
+        assertTrue(e.getMessage().contains("simulation.particles must be a whole number"), e.getMessage());
+    }
+
+    @Test
+    void syntaxErrorsNameLineAndColumn() {
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> ScenarioReader.parse("{\n  \"version\": 1,\n  \"name\": oops\n}"));
+        assertTrue(e.getMessage().startsWith("line 3, column"), e.getMessage());
+    }
+
+    @Test
+    void missingSectionsAreNamed() {
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> ScenarioReader.parse("{ \"version\": 1, \"name\": \"x\" }"));
+        assertTrue(e.getMessage().contains("flow is missing"), e.getMessage());
+        assertTrue(e.getMessage().contains("substance is missing"), e.getMessage());
+    }
+
+    @Test
+    void everyBundledPresetIsValid() throws Exception {
+        try (Stream<Path> files = Files.list(Path.of("presets"))) {
+            long n = files.filter(p -> p.toString().endsWith(".json")).peek(p -> {
+                try {
+                    ScenarioReader.read(p);
+                } catch (Exception ex) {
+                    throw new AssertionError(p + ": " + ex.getMessage(), ex);
+                }
+            }).count();
+            assertTrue(n >= 3, "at least three presets");
+        }
+    }
+}
