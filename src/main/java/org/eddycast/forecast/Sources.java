@@ -35,6 +35,6 @@ public final class Sources {
             "An update on the energy dissipation rate in isotropic turbulence", "Phys. Fluids 10:528");
     public static final Reference RUSHTON_1950 = new Reference("Rushton, Costich & Everett", 1950,
             "Power characteristics of mixing impellers", "Chem. Eng. Prog. 46:395 and 467");
-    public static final Reference IAPWS_2008 = new Reference("Huber et al. (IAPWS 2008)", 2009,
-            "New international formulation for the viscosity of H2O", "J. Phys. Chem. Ref. Data 38:101");
+    public static final Reference IAPWS_2008 = new Reference("Huber et al.", 2009,
+            "New international formulation for the viscosity of H2O", "J. Phys. Chem. Ref. Data 38:101 (IAPWS 2008)");
 }

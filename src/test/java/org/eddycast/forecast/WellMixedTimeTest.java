@@ -39,6 +39,22 @@ class WellMixedTimeTest {
     }
 
     @Test
+    void deviationMatchesBruteForceWhereTheFarWallIsWorst() {
+        // For a release between a quarter and half the gap the largest departure is the deficit at the far
+        // wall, not the excess near the release (first mode: 1 +- 2 cos(pi x0 / L) q at the two walls, and the
+        // second mode lowers both). The worst-point rule must see it: compare with a 4001-point grid.
+        TwoWallCosineAxis axis = new TwoWallCosineAxis(0, 1, 0.4, 0.05);
+        for (double t : new double[] {0.5, 1.0, 2.0}) {
+            double worst = 0.0;
+            for (int i = 0; i <= 4000; i++) {
+                worst = Math.max(worst, Math.abs(axis.relativeDensity(i / 4000.0, t) - 1.0));
+            }
+            assertEquals(worst, WellMixedTime.deviation(t, axis), 1e-6, "t=" + t);
+            assertTrue(1.0 - axis.lowestRelativeDensity(t) > axis.peakRelativeDensity(t) - 1.0);
+        }
+    }
+
+    @Test
     void deviationNeverGrows() {
         // Maximum principle for zero-flux diffusion: the deviation from uniform is non-increasing in time.
         TwoWallCosineAxis a = new TwoWallCosineAxis(0, 1, 0.2, 0.01);
