@@ -48,17 +48,18 @@ public record TwoWallCosineAxis(double lower, double upper, double release, doub
 
     @Override
     public double density(double x, double t) {
-        if (x < lower || x > upper) {
-            return 0.0;
-        }
         return relativeDensity(x, t) / gap();
     }
 
     /**
-     * The density over its final uniform value 1/L (dimensionless): 1 when mixed. For t &gt; 0.
+     * The density over its final uniform value 1/L (dimensionless): 1 when mixed, 0 outside the gap.
+     * For t &gt; 0.
      */
     public double relativeDensity(double x, double t) {
         Checks.positive("t", t, "s");
+        if (x < lower || x > upper) {
+            return 0.0;
+        }
         double gap = upper - lower;
         double c = Math.PI * Math.PI * diffusivity * t / (gap * gap);
         double phase = Math.PI * (x - lower) / gap;
