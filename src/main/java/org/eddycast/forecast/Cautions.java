@@ -1,0 +1,24 @@
+package org.eddycast.forecast;
+
+import java.util.List;
+
+/** The cautions every forecast carries, in the order outputs show them. */
+public final class Cautions {
+
+    /** The cautions, one sentence or two each. */
+    public static final List<String> ALL = List.of(
+            "This is a screening estimate for planning and comparison. It is not a design, permit or compliance"
+                    + " calculation.",
+            "It rests on the assumptions stated with it (homogeneous turbulence, a passive tracer that neither"
+                    + " decays nor settles, and the rules listed for every value); real flows can mix faster or"
+                    + " slower.",
+            "Decisions that affect people or the environment belong with licensed professionals, following local"
+                    + " codes and the conditions of any permit.",
+            "Before releasing dye or any other tracer, tell the authority responsible for the water and obtain"
+                    + " the permits it requires.",
+            "Whether a tracer is harmful at the planned dose, and the protection of drinking-water intakes and"
+                    + " other users downstream, are outside this tool: check them separately.");
+
+    private Cautions() {
+    }
+}

@@ -1,0 +1,47 @@
+package org.eddycast.scenario;
+
+/**
+ * A stirred tank as the user describes it, in SI units. Plain data: the rules that turn it into turbulence
+ * statistics live in the forecast package.
+ *
+ * <p>Optional fields are null when not given: {@code powerNumber} (then {@code impellerType} must be given
+ * and a typical value is used) and {@code kinematicViscosity} (then water at 20 C, 1.0034e-6 m^2/s,
+ * IAPWS 2008: Huber et al. 2009, J. Phys. Chem. Ref. Data 38:101).
+ *
+ * @param tankDiameter       T (m), greater than 0
+ * @param liquidHeight       H (m), greater than 0
+ * @param impellerDiameter   D (m), greater than 0 and less than T
+ * @param impellerSpeed      N (rev/s), greater than 0
+ * @param powerNumber        Po (-), greater than 0, or null to use the impeller type's typical value
+ * @param impellerType       impeller family, or null when the power number is given
+ * @param kinematicViscosity nu (m^2/s), greater than 0, or null for water at 20 C
+ * @param baffled            true when the tank has wall baffles
+ */
+public record TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
+                         Double powerNumber, ImpellerType impellerType, Double kinematicViscosity,
+                         boolean baffled) {
+
+    /** Kinematic viscosity of water at 20 C and 0.1 MPa (m^2/s): IAPWS 2008 (Huber et al. 2009). */
+    public static final double WATER_20C_KINEMATIC_VISCOSITY = 1.0034e-6;
+
+    public TankDesign {
+        DesignChecks.positive("tank.tankDiameter", tankDiameter, "m");
+        DesignChecks.positive("tank.liquidHeight", liquidHeight, "m");
+        DesignChecks.openRange("tank.impellerDiameter", impellerDiameter, 0, tankDiameter, "m");
+        DesignChecks.positive("tank.impellerSpeed", impellerSpeed, "rev/s");
+        if (powerNumber != null) {
+            DesignChecks.positive("tank.powerNumber", powerNumber, "(dimensionless)");
+        } else if (impellerType == null) {
+            throw new IllegalArgumentException("tank.powerNumber or tank.impellerType must be given");
+        }
+        if (kinematicViscosity == null) {
+            kinematicViscosity = WATER_20C_KINEMATIC_VISCOSITY;
+        }
+        DesignChecks.positive("tank.kinematicViscosity", kinematicViscosity, "m^2/s");
+    }
+
+    /** Liquid volume pi T^2 H / 4 (m^3) of a flat-bottomed cylinder. */
+    public double volume() {
+        return Math.PI * tankDiameter * tankDiameter * liquidHeight / 4.0;
+    }
+}
