@@ -128,30 +128,52 @@ public final class SyntheticRecord {
      * slow drift and injected spikes. See the comment lines at its top for how it is made.
      */
     public static String flumeProbeCsv() {
-        double fs = 50;
+        return flumeProbeDemo().csv();
+    }
+
+    /**
+     * The demo record's text and where its spikes were injected.
+     *
+     * @param csv          the file text
+     * @param spikeSamples per component, the sample indices (from 0) that received a spike, ascending
+     */
+    record FlumeDemo(String csv, int[][] spikeSamples) {
+    }
+
+    /** Sampling rate of the demo record (Hz). */
+    static final double FLUME_RATE = 50;
+    /** Mean speed of the demo record (m/s). */
+    static final double FLUME_MEAN_SPEED = 0.30;
+    /** Rms per component of the demo record's turbulence (m/s). */
+    static final double[] FLUME_RMS = {0.030, 0.022, 0.016};
+    /** Knee frequency per component of the demo record's spectrum (Hz). */
+    static final double[] FLUME_KNEE = {0.3, 0.45, 0.6};
+    /** Linear drift added to u over the whole demo record (m/s), as when a flume's pump settles. */
+    static final double FLUME_DRIFT = 0.03;
+    /** Rms of the white instrument noise added to each component (m/s). */
+    static final double FLUME_NOISE = 0.002;
+
+    static FlumeDemo flumeProbeDemo() {
+        double fs = FLUME_RATE;
         int n = 12_000;
-        double meanSpeed = 0.30;
-        double[] rms = {0.030, 0.022, 0.016};
-        double[] knee = {0.3, 0.45, 0.6};
-        double[] mean = {meanSpeed, 0.004, -0.002};
-        double noise = 0.002;
-        double drift = 0.006;
+        double[] mean = {FLUME_MEAN_SPEED, 0.004, -0.002};
+        double drift = FLUME_DRIFT;
         RandomGenerator random = new Well19937c(FLUME_SEED);
         double[][] v = new double[3][];
         for (int c = 0; c < 3; c++) {
-            v[c] = fourierSynthesis(n, fs, karmanShapedSpectrum(rms[c], knee[c]), random.nextLong());
+            v[c] = fourierSynthesis(n, fs, karmanShapedSpectrum(FLUME_RMS[c], FLUME_KNEE[c]), random.nextLong());
             for (int i = 0; i < n; i++) {
-                v[c][i] += mean[c] + noise * random.nextGaussian();
+                v[c][i] += mean[c] + FLUME_NOISE * random.nextGaussian();
             }
         }
         for (int i = 0; i < n; i++) {
             v[0][i] += drift * (i / (n - 1.0) - 0.5);
         }
-        int[] spikes = {14, 7, 6};
-        StringBuilder spikeNote = new StringBuilder();
+        int[] spikeCounts = {14, 7, 6};
+        int[][] spikeSamples = new int[3][];
         for (int c = 0; c < 3; c++) {
-            java.util.Set<Integer> used = new java.util.HashSet<>();
-            for (int s = 0; s < spikes[c]; s++) {
+            java.util.TreeSet<Integer> used = new java.util.TreeSet<>();
+            for (int s = 0; s < spikeCounts[c]; s++) {
                 int i = 50 + random.nextInt(n - 100);
                 while (!used.add(i)) {
                     i = 50 + random.nextInt(n - 100);
@@ -159,7 +181,7 @@ public final class SyntheticRecord {
                 double size = (0.15 + 0.25 * random.nextDouble()) * (random.nextBoolean() ? 1 : -1);
                 v[c][i] += size;
             }
-            spikeNote.append(c == 0 ? "" : ", ").append(spikes[c]).append(" in ").append("uvw".charAt(c));
+            spikeSamples[c] = used.stream().mapToInt(Integer::intValue).toArray();
         }
         StringBuilder out = new StringBuilder(n * 36);
         out.append("# SYNTHETIC demo record, invented for eddycast: not a measurement.\n");
@@ -169,12 +191,12 @@ public final class SyntheticRecord {
                 .append(": each component\n");
         out.append("# by random-phase Fourier synthesis of E(f) = A / (1 + (f/f0)^2)^(5/6) with rms 0.030, 0.022,\n");
         out.append("# 0.016 m/s and f0 = 0.3, 0.45, 0.6 Hz; white noise of 0.002 m/s rms added to each component;\n");
-        out.append("# a linear drift of 0.006 m/s over the record added to u; single-sample spikes of 0.15 to\n");
-        out.append("# 0.40 m/s added at random samples (").append(spikeNote).append(").\n");
+        out.append("# a linear drift of 0.03 m/s over the record added to u; single-sample spikes of 0.15 to\n");
+        out.append("# 0.40 m/s added at random samples (14 in u, 7 in v, 6 in w).\n");
         out.append("time [s], u [m/s], v [m/s], w [m/s]\n");
         for (int i = 0; i < n; i++) {
             out.append(String.format(Locale.ROOT, "%.2f,%.4f,%.4f,%.4f\n", i / fs, v[0][i], v[1][i], v[2][i]));
         }
-        return out.toString();
+        return new FlumeDemo(out.toString(), spikeSamples);
     }
 }
