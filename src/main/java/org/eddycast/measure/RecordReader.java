@@ -41,6 +41,8 @@ public final class RecordReader {
 
     /** Largest number of samples read, to keep memory bounded (about 43 hours at 64 Hz). */
     public static final int MAX_SAMPLES = 10_000_000;
+    /** Largest velocity magnitude accepted (m/s): far above any water or air flow a probe measures. */
+    public static final double MAX_SPEED = 1000.0;
     /** Default gap threshold: a step above 1.5 median steps is a gap (common practice: at least one sample lost). */
     public static final double DEFAULT_GAP_FACTOR = 1.5;
 
@@ -359,7 +361,13 @@ public final class RecordReader {
             }
             for (int c = 0; c < velocities.length; c++) {
                 int j = layout.velocityColumns.get(c);
-                velocities[c].add(number(fields, j) * layout.velocityScales.get(c));
+                double v = number(fields, j) * layout.velocityScales.get(c);
+                if (Math.abs(v) > MAX_SPEED) {
+                    throw new RecordFormatException(lineNo, j + 1, "'" + fields[j] + "' in column '"
+                            + layout.columnLabels[j] + "' is " + fmt(v) + " m/s, not a flow velocity (at most "
+                            + fmt(MAX_SPEED) + " m/s in magnitude); check the column's unit");
+                }
+                velocities[c].add(v);
             }
             lines.add(lineNo);
             previousLine = lineNo;

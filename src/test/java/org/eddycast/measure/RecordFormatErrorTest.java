@@ -128,6 +128,14 @@ class RecordFormatErrorTest {
     }
 
     @Test
+    void aSpeedNoFlowHasIsRejectedWithAHintAboutUnits() {
+        RecordFormatException e = readFails("time [s], u [mm/s]\n0, 300\n0.1, 2e9\n");
+        assertEquals(3, e.getLine());
+        assertEquals(2, e.getColumn());
+        assertMentions(e, "not a flow velocity", "unit");
+    }
+
+    @Test
     void aSingleSampleIsRejected() {
         RecordFormatException e = readFails("time [s], u [m/s]\n0, 0.1\n");
         assertEquals(2, e.getLine());
@@ -177,5 +185,52 @@ class RecordFormatErrorTest {
             }
         }
         assertTrue(failures > 100, "most corruptions should be caught, got " + failures);
+    }
+
+    /**
+     * Robustness of the analysis: odd but readable signals (a single spike, a step, a pure tone, coarse
+     * quantisation, tiny and huge values, a ramp, alternation, heavy spiking; fixed seed) either give finite,
+     * positive scales or a RecordFormatException; nothing else escapes.
+     */
+    @Test
+    void oddSignalsNeverCrashTheAnalysis() {
+        Random random = new Random(1);
+        int analysed = 0;
+        for (int trial = 0; trial < 90; trial++) {
+            int n = 512 + random.nextInt(1500);
+            int m = 1 + random.nextInt(3);
+            double[][] v = new double[m][n];
+            int kind = trial % 9;
+            for (int c = 0; c < m; c++) {
+                for (int i = 0; i < n; i++) {
+                    double x = switch (kind) {
+                        case 0 -> i == n / 2 ? 1 : 0;
+                        case 1 -> i < n / 2 ? 0 : 1;
+                        case 2 -> Math.sin(0.3 * i);
+                        case 3 -> Math.round(random.nextGaussian()) * 0.01;
+                        case 4 -> 1e-200 * random.nextGaussian();
+                        case 5 -> 900 * random.nextGaussian() / 4;
+                        case 6 -> i;
+                        case 7 -> i % 2 == 0 ? 1 : -1;
+                        default -> random.nextGaussian() + (random.nextDouble() < 0.3 ? 50 * random.nextGaussian() : 0);
+                    };
+                    v[c][i] = x + (c == 0 ? random.nextDouble() : 0);
+                }
+            }
+            VelocityRecord record = Records.of(50, v);
+            AnalysisOptions options = AnalysisOptions.defaults().withDespike(random.nextBoolean())
+                    .withDetrend(random.nextBoolean());
+            try {
+                org.eddycast.scenario.TurbulenceStatistics s = RecordAnalyzer.analyze(record, options).statistics();
+                assertTrue(Double.isFinite(s.rmsVelocity()) && s.integralLength() > 0
+                        && Double.isFinite(s.integralLength()) && s.correlationTime() > 0, "kind " + kind + ": " + s);
+                analysed++;
+            } catch (RecordFormatException e) {
+                assertTrue(e.getLine() >= 0, e.getMessage());
+            } catch (RuntimeException e) {
+                fail("kind " + kind + ": unexpected " + e);
+            }
+        }
+        assertTrue(analysed > 45, "most odd signals are still analysable, got " + analysed);
     }
 }
