@@ -64,9 +64,26 @@ public final class RecordAnalysis {
 
     /** The engine's input with a power-law spectrum: fitted slope (or -5/3 without a fit) and the band's ratio. */
     public TurbulenceStatistics statistics() {
+        return build(powerLawSpectrum(), "power-law band: fitted slope and wavenumber ratio above");
+    }
+
+    /** The power-law spectrum: fitted slope (or -5/3 without a fit) and the band's wavenumber ratio. */
+    public SpectrumSpec powerLawSpectrum() {
         double slope = fit != null ? fit.slope() : SpectrumSpec.KOLMOGOROV_SLOPE;
-        return build(SpectrumSpec.powerLaw(slope, scales.wavenumberRatio()), "power-law band: fitted slope and"
-                + " wavenumber ratio above");
+        return SpectrumSpec.powerLaw(slope, scales.wavenumberRatio());
+    }
+
+    /**
+     * Pope's model spectrum fixed by the measured Kolmogorov length.
+     *
+     * @throws IllegalStateException when no dissipation rate (hence no Kolmogorov length) could be estimated
+     */
+    public SpectrumSpec modelSpectrum() {
+        if (Double.isNaN(scales.kolmogorovLength())) {
+            throw new IllegalStateException("no Kolmogorov length: the record gave no dissipation rate (no inertial"
+                    + " range could be fitted); use the power-law spectrum instead");
+        }
+        return SpectrumSpec.modelSpectrum(scales.kolmogorovLength());
     }
 
     /**
@@ -75,12 +92,8 @@ public final class RecordAnalysis {
      * @throws IllegalStateException when no dissipation rate (hence no Kolmogorov length) could be estimated
      */
     public TurbulenceStatistics statisticsWithModelSpectrum() {
-        if (Double.isNaN(scales.kolmogorovLength())) {
-            throw new IllegalStateException("no Kolmogorov length: the record gave no dissipation rate (no inertial"
-                    + " range could be fitted); use statistics() with the power-law spectrum instead");
-        }
-        return build(SpectrumSpec.modelSpectrum(scales.kolmogorovLength()), "model spectrum (Pope 2000, Turbulent"
-                + " Flows, sec. 6.5.3) with the Kolmogorov length above");
+        return build(modelSpectrum(), "model spectrum (Pope 2000, Turbulent Flows, sec. 6.5.3) with the Kolmogorov"
+                + " length above");
     }
 
     private TurbulenceStatistics build(SpectrumSpec spec, String spectrumRule) {

@@ -31,7 +31,7 @@ import org.eddycast.scenario.Derivation;
  *   <li>Autocorrelation and integral time ({@link AutocorrelationEstimator}), Welch spectrum
  *       ({@link WelchSpectrumEstimator}) and inertial-range fit ({@link InertialRangeFitter}) of the streamwise
  *       signal.</li>
- *   <li>Scales ({@link ScaleRules}): dissipation rate, integral length, correlation time, Kolmogorov length,
+ *   <li>Scales (rules in ScaleRules, results in {@link ScaleEstimates}): dissipation rate, integral length, correlation time, Kolmogorov length,
  *       wavenumber ratio.</li>
  * </ol>
  * A one-component record is treated as three-dimensional isotropic turbulence, with a warning; a

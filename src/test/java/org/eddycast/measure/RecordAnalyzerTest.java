@@ -57,7 +57,9 @@ class RecordAnalyzerTest {
         assertEquals(s.integralLength(), t.integralLength());
         assertEquals(s.correlationTime(), t.correlationTime());
 
+        assertEquals(t.spectrum(), a.powerLawSpectrum());
         TurbulenceStatistics m = a.statisticsWithModelSpectrum();
+        assertEquals(m.spectrum(), a.modelSpectrum());
         assertEquals(SpectrumSpec.Model.MODEL_SPECTRUM, m.spectrum().model());
         // Kolmogorov 1941: eta = (nu^3 / eps)^(1/4), water at 20 C by default
         assertEquals(Math.pow(Math.pow(1.0034e-6, 3) / a.scales().dissipationRate(), 0.25),
