@@ -1,11 +1,20 @@
 package org.eddycast.engine;
 
 import java.time.Instant;
+import java.util.List;
+import org.eddycast.forecast.ChannelRules;
+import org.eddycast.forecast.ModeledTurbulence;
+import org.eddycast.forecast.TankRules;
+import org.eddycast.measure.AnalysisOptions;
+import org.eddycast.measure.RecordAnalysis;
+import org.eddycast.measure.RecordAnalyzer;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
+import org.eddycast.scenario.ChannelFlow;
 import org.eddycast.scenario.DirectFlow;
+import org.eddycast.scenario.MeasuredFlow;
 import org.eddycast.scenario.Scenario;
-import org.eddycast.scenario.TurbulenceStatistics;
+import org.eddycast.scenario.TankFlow;
 
 /**
  * The one entry point the panel, the command line and the report share: a scenario in, a study result out.
@@ -21,17 +30,47 @@ public final class Engine {
         return Runtime.getRuntime().availableProcessors();
     }
 
-    /** Resolves the scenario's flow into turbulence statistics (null for verification flows). */
-    public static TurbulenceStatistics turbulence(Scenario s) {
+    /**
+     * Turns the scenario's flow into turbulence statistics: given directly, modeled from a tank's or a
+     * channel's design data, or analysed from a measured record.
+     *
+     * @throws org.eddycast.measure.RecordFormatException for a record that cannot be read
+     */
+    public static ResolvedFlow resolve(Scenario s) {
         if (s.flow() instanceof DirectFlow d) {
-            return CaseBuilder.direct(d);
+            return new ResolvedFlow(CaseBuilder.direct(d), List.of(),
+                    List.of("turbulence statistics given directly by the user"), null);
         }
-        return null;
+        if (s.flow() instanceof TankFlow t) {
+            return modeled(TankRules.STANDARD.model(t.design()));
+        }
+        if (s.flow() instanceof ChannelFlow c) {
+            return modeled(ChannelRules.STANDARD.model(c.design()));
+        }
+        if (s.flow() instanceof MeasuredFlow m) {
+            return measured(m);
+        }
+        return new ResolvedFlow(null, List.of(), List.of(), null);
+    }
+
+    private static ResolvedFlow modeled(ModeledTurbulence m) {
+        return new ResolvedFlow(m.statistics(), m.warnings(), m.assumptions(), null);
+    }
+
+    private static ResolvedFlow measured(MeasuredFlow m) {
+        AnalysisOptions options = AnalysisOptions.defaults().withDespike(m.despike()).withDetrend(m.detrend())
+                .withKinematicViscosity(m.kinematicViscosity());
+        if (!Double.isNaN(m.samplingRate())) {
+            options = options.withSamplingRate(m.samplingRate());
+        }
+        RecordAnalysis a = RecordAnalyzer.analyze(m.resolved(), options);
+        return new ResolvedFlow(m.modelSpectrum() ? a.statisticsWithModelSpectrum() : a.statistics(), a.warnings(),
+                List.of("turbulence statistics measured at one point and assumed to hold throughout the flow"), a);
     }
 
     /** The dimensionless case of a scenario. */
     public static DimensionlessCase dimensionlessCase(Scenario s) {
-        return CaseBuilder.build(s, turbulence(s));
+        return CaseBuilder.build(s, resolve(s).turbulence());
     }
 
     /**
@@ -42,9 +81,9 @@ public final class Engine {
      * @throws org.eddycast.particles.NumericalBlowupException when the time step is far too large
      */
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel) {
-        TurbulenceStatistics t = turbulence(s);
-        DimensionlessCase c = CaseBuilder.build(s, t);
+        ResolvedFlow flow = resolve(s);
+        DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
         DiffusivityResult r = DiffusivityStudy.run(c, threads, listener, cancel);
-        return new StudyResult(s, t, r, ToolVersion.get(), Instant.now());
+        return new StudyResult(s, flow, r, ToolVersion.get(), Instant.now());
     }
 }

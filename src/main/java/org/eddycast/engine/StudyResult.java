@@ -5,9 +5,14 @@ import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TurbulenceStatistics;
 
 /**
- * Everything one scenario produced: the scenario itself, the turbulence statistics it resolved to (null for a
- * verification flow), the diffusivity result, the tool version and when it finished.
+ * Everything one scenario produced: the scenario itself, its resolved flow, the diffusivity result, the tool
+ * version and when it finished.
  */
-public record StudyResult(Scenario scenario, TurbulenceStatistics turbulence, DiffusivityResult diffusivity,
+public record StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity,
                           String toolVersion, Instant finished) {
+
+    /** The turbulence statistics (null for a verification flow). */
+    public TurbulenceStatistics turbulence() {
+        return flow.turbulence();
+    }
 }

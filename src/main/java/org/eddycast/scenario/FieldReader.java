@@ -29,6 +29,23 @@ final class FieldReader {
         return path.isEmpty() ? field : path + "." + field;
     }
 
+    String path() {
+        return path.isEmpty() ? "(top level)" : path;
+    }
+
+    /** A true/false value, or the default when absent. */
+    boolean bool(String field, boolean fallback) {
+        JsonNode v = node.get(field);
+        if (v == null || v.isNull()) {
+            return fallback;
+        }
+        if (!v.isBoolean()) {
+            problems.add(name(field) + " must be true or false; got " + v);
+            return fallback;
+        }
+        return v.asBoolean();
+    }
+
     boolean has(String field) {
         return node.hasNonNull(field);
     }

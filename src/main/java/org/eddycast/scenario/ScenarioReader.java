@@ -37,11 +37,17 @@ public final class ScenarioReader {
 
     /** Reads a scenario file. */
     public static Scenario read(Path file) throws IOException {
-        return parse(Files.readString(file, StandardCharsets.UTF_8));
+        Path folder = file.toAbsolutePath().getParent();
+        return parse(Files.readString(file, StandardCharsets.UTF_8), folder == null ? Path.of("") : folder);
     }
 
-    /** Parses and validates scenario text. */
+    /** Parses and validates scenario text; relative record paths are resolved against the working folder. */
     public static Scenario parse(String json) {
+        return parse(json, Path.of("").toAbsolutePath());
+    }
+
+    /** Parses and validates scenario text; relative record paths are resolved against {@code folder}. */
+    public static Scenario parse(String json, Path folder) {
         JsonNode root;
         try {
             root = MAPPER.readTree(json);
@@ -64,21 +70,36 @@ public final class ScenarioReader {
         String name = top.text("name", "unnamed scenario", false);
         String description = top.text("description", "", false);
         FieldReader flowNode = top.object("flow", true);
-        FlowSpec flow = flowNode == null ? null : readFlow(flowNode);
+        FlowSpec flow = flowNode == null ? null : readFlow(flowNode, folder);
         FieldReader substanceNode = top.object("substance", true);
         Substance substance = substanceNode == null ? null : readSubstance(substanceNode);
         FieldReader simulationNode = top.object("simulation", false);
         SimulationSettings simulation = readSimulation(simulationNode, flow);
+        FieldReader releaseNode = top.object("release", false);
+        Release release = releaseNode == null ? Release.defaults() : readRelease(releaseNode);
+        FieldReader forecastNode = top.object("forecast", false);
+        ForecastSettings forecast = forecastNode == null ? ForecastSettings.defaults() : readForecast(forecastNode);
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
-        return new Scenario(version, name, description, flow, substance, simulation);
+        return new Scenario(version, name, description, flow, substance, release, forecast, simulation);
     }
 
-    private static FlowSpec readFlow(FieldReader f) {
-        String kind = f.choice("kind", List.of("direct", "shear", "cellular", "beltrami"), null, true);
+    private static FlowSpec readFlow(FieldReader f, Path folder) {
+        String kind = f.choice("kind", List.of("direct", "tank", "channel", "measured", "shear", "cellular",
+                "beltrami"), null, true);
         if (kind == null) {
             return null;
+        }
+        switch (kind) {
+            case "tank":
+                return readTank(f);
+            case "channel":
+                return readChannel(f);
+            case "measured":
+                return readMeasured(f, folder);
+            default:
+                break;
         }
         int dims = (int) f.integer("dimensions", 2, 3, kind.equals("beltrami") ? 3 : ("direct".equals(kind) ? 3 : 2),
                 false);
@@ -142,6 +163,111 @@ public final class ScenarioReader {
             }
         }
         return new DirectFlow(dims, rms, length, tau, spectrum, mean);
+    }
+
+    private static TankFlow readTank(FieldReader f) {
+        double t = f.number("tankDiameter", "m", 0, 1e3, true, 1, true);
+        double h = f.number("liquidHeight", "m", 0, 1e3, true, 1, true);
+        double d = f.number("impellerDiameter", "m", 0, 1e3, true, 0.3, true);
+        double n = f.number("impellerSpeed", "rev/s", 0, 1e3, true, 1, true);
+        Double po = f.has("powerNumber") ? f.number("powerNumber", "", 0, 100, true, 1, true) : null;
+        List<String> types = new ArrayList<>();
+        for (ImpellerType i : ImpellerType.values()) {
+            types.add(i.key());
+        }
+        String typeKey = f.choice("impellerType", types, null, false);
+        ImpellerType type = typeKey == null ? null : ImpellerType.fromKey(typeKey);
+        Double nu = f.has("kinematicViscosity")
+                ? f.number("kinematicViscosity", "m^2/s", 0, 1, true, 1e-6, true) : null;
+        boolean baffled = f.bool("baffled", true);
+        boolean ok = true;
+        if (d >= t) {
+            f.problem(f.name("impellerDiameter") + " must be smaller than tankDiameter (" + FieldReader.format(t)
+                    + " m); got " + FieldReader.format(d));
+            ok = false;
+        }
+        if (po == null && type == null) {
+            if (!f.has("impellerType")) {
+                f.problem(f.name("powerNumber") + " or " + f.name("impellerType") + " must be given (impellerType "
+                        + "one of " + String.join(", ", types) + ")");
+            }
+            ok = false;
+        }
+        if (!ok) {
+            return null;
+        }
+        try {
+            return new TankFlow(new TankDesign(t, h, d, n, po, type, nu, baffled));
+        } catch (IllegalArgumentException e) {
+            f.problem(e.getMessage());
+            return null;
+        }
+    }
+
+    private static ChannelFlow readChannel(FieldReader f) {
+        double h = f.number("depth", "m", 0, 1e3, true, 1, true);
+        double w = f.number("width", "m", 0, 1e5, true, 10, true);
+        double u = f.number("meanVelocity", "m/s", 0, 100, true, 1, true);
+        Double slope = f.has("bedSlope") ? f.number("bedSlope", "m/m", 0, 1, true, 1e-3, true) : null;
+        Double shear = f.has("shearVelocity") ? f.number("shearVelocity", "m/s", 0, 100, true, 0.05, true) : null;
+        Double manning = f.has("manningN") ? f.number("manningN", "s/m^(1/3)", 0, 1, true, 0.03, true) : null;
+        Double nu = f.has("kinematicViscosity")
+                ? f.number("kinematicViscosity", "m^2/s", 0, 1, true, 1e-6, true) : null;
+        int given = (slope != null ? 1 : 0) + (shear != null ? 1 : 0) + (manning != null ? 1 : 0);
+        if (given != 1) {
+            f.problem(f.path() + ": give exactly one of bedSlope (m/m), shearVelocity (m/s) or manningN "
+                    + "(s/m^(1/3)); got " + given);
+            return null;
+        }
+        try {
+            return new ChannelFlow(new ChannelDesign(h, w, u, slope, shear, manning, nu));
+        } catch (IllegalArgumentException e) {
+            f.problem(e.getMessage());
+            return null;
+        }
+    }
+
+    private static MeasuredFlow readMeasured(FieldReader f, Path folder) {
+        String record = f.text("record", null, true);
+        String spectrum = f.choice("spectrum", List.of("power-law", "model"), "power-law", false);
+        double rate = f.has("samplingRate") ? f.number("samplingRate", "Hz", 0, 1e6, true, Double.NaN, true)
+                : Double.NaN;
+        boolean despike = f.bool("despike", true);
+        boolean detrend = f.bool("detrend", true);
+        double nu = f.number("kinematicViscosity", "m^2/s", 0, 1, true, TankDesign.WATER_20C_KINEMATIC_VISCOSITY,
+                false);
+        if (record == null) {
+            return null;
+        }
+        Path resolved = folder.resolve(record).normalize();
+        if (!Files.isRegularFile(resolved)) {
+            f.problem(f.name("record") + " names a file that does not exist: " + resolved
+                    + " (a path relative to the scenario's folder)");
+        }
+        return new MeasuredFlow(record, resolved, spectrum.equals("model"), rate, despike, detrend, nu);
+    }
+
+    private static Release readRelease(FieldReader r) {
+        double mass = r.number("mass", "kg", 0, 1e9, true, 1.0, false);
+        double rate = r.number("rate", "kg/s", 0, 1e9, true, Double.NaN, false);
+        String where = r.choice("location", List.of("centre-line", "bank"), "centre-line", false);
+        double[] position = null;
+        FieldReader p = r.object("position", false);
+        if (p != null) {
+            position = new double[] {p.number("x", "m", 0, 1e5, false, 0, true), p.number("y", "m", 0, 1e5, false, 0,
+                    true), p.number("z", "m", 0, 1e5, false, 0, true)};
+        }
+        return new Release(mass, rate, position, where.equals("bank"));
+    }
+
+    private static ForecastSettings readForecast(FieldReader r) {
+        double horizon = r.number("horizon", "s", 0, 1e9, true, Double.NaN, false);
+        String measure = r.choice("widthMeasure", ForecastSettings.WIDTH_MEASURES, "fwhm", false);
+        double edge = r.number("edgeFraction", "", 0, 1, true, 0.1, false);
+        if (edge >= 1) {
+            r.problem(r.name("edgeFraction") + " must be below 1; got " + FieldReader.format(edge));
+        }
+        return new ForecastSettings(horizon, measure, edge);
     }
 
     private static Substance readSubstance(FieldReader s) {

@@ -23,9 +23,13 @@ class FlumeDemoRecordTest {
     private static final String RESOURCE = "presets/records/flume-probe.csv";
 
     private static URL resource() {
-        URL url = FlumeDemoRecordTest.class.getClassLoader().getResource(RESOURCE);
-        assertNotNull(url, RESOURCE + " is bundled");
-        return url;
+        Path file = Path.of(RESOURCE);
+        assertTrue(java.nio.file.Files.isRegularFile(file), RESOURCE + " is bundled");
+        try {
+            return file.toUri().toURL();
+        } catch (java.net.MalformedURLException e) {
+            throw new AssertionError(e);
+        }
     }
 
     @Test

@@ -76,4 +76,32 @@ class ScenarioReaderTest {
             assertTrue(n >= 3, "at least three presets");
         }
     }
+
+    @Test
+    void everyPresetRoundTripsThroughTheWriter() throws Exception {
+        try (Stream<Path> files = Files.list(Path.of("presets"))) {
+            for (Path p : files.filter(f -> f.toString().endsWith(".json")).toList()) {
+                Scenario first = ScenarioReader.read(p);
+                String written = ScenarioWriter.text(first);
+                Scenario second = ScenarioReader.parse(written, p.toAbsolutePath().getParent());
+                assertEquals(written, ScenarioWriter.text(second), p + " round trip");
+                assertEquals(first.flow().kind(), second.flow().kind());
+            }
+        }
+    }
+
+    @Test
+    void tankAndChannelFieldsAreValidatedByName() {
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioReader.parse("""
+                { "version": 1, "flow": { "kind": "tank", "tankDiameter": 1, "liquidHeight": 1,
+                  "impellerDiameter": 2, "impellerSpeed": -1, "impellerType": "paddle" },
+                  "substance": { "molecularDiffusivity": 1e-9 } }"""));
+        assertTrue(e.getMessage().contains("flow.impellerSpeed must be between 0 (exclusive) and 1000 rev/s; got -1"), e.getMessage());
+        assertTrue(e.getMessage().contains("flow.impellerType must be one of"), e.getMessage());
+        assertTrue(e.getMessage().contains("flow.impellerDiameter must be smaller than tankDiameter"), e.getMessage());
+        ScenarioException c = assertThrows(ScenarioException.class, () -> ScenarioReader.parse("""
+                { "version": 1, "flow": { "kind": "channel", "depth": 1, "width": 5, "meanVelocity": 0.5 },
+                  "substance": { "molecularDiffusivity": 1e-9 } }"""));
+        assertTrue(c.getMessage().contains("give exactly one of bedSlope"), c.getMessage());
+    }
 }

@@ -1,0 +1,156 @@
+package org.eddycast.scenario;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Path;
+
+/**
+ * Writes scenarios in the format {@link ScenarioReader} reads (the current format version), atomically.
+ * Reading what this writes gives back an equal scenario.
+ */
+public final class ScenarioWriter {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ScenarioWriter() {
+    }
+
+    /** Writes the scenario to a file (temporary file, then move). */
+    public static void write(Scenario s, Path file) throws IOException {
+        AtomicFiles.writeString(file, text(s) + "\n");
+    }
+
+    /** The scenario as JSON text. */
+    public static String text(Scenario s) {
+        try {
+            return MAPPER.writeValueAsString(tree(s));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** The scenario as a JSON tree. */
+    public static ObjectNode tree(Scenario s) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("version", Scenario.FORMAT_VERSION);
+        root.put("name", s.name());
+        if (!s.description().isEmpty()) {
+            root.put("description", s.description());
+        }
+        flow(root.putObject("flow"), s.flow());
+        ObjectNode substance = root.putObject("substance");
+        if (!s.substance().name().isEmpty()) {
+            substance.put("name", s.substance().name());
+        }
+        substance.put("molecularDiffusivity", s.substance().molecularDiffusivity());
+        release(root.putObject("release"), s.release());
+        ObjectNode forecast = root.putObject("forecast");
+        optional(forecast, "horizon", s.forecast().horizon());
+        forecast.put("widthMeasure", s.forecast().widthMeasure());
+        forecast.put("edgeFraction", s.forecast().edgeFraction());
+        simulation(root.putObject("simulation"), s.simulation());
+        return root;
+    }
+
+    private static void flow(ObjectNode n, FlowSpec flow) {
+        n.put("kind", flow.kind());
+        if (flow instanceof DirectFlow d) {
+            n.put("dimensions", d.dimensions());
+            n.put("rmsVelocity", d.rmsVelocity());
+            n.put("integralLength", d.integralLength());
+            optional(n, "correlationTime", d.correlationTime());
+            if (d.meanVelocity() != 0) {
+                n.put("meanVelocity", d.meanVelocity());
+            }
+            ObjectNode sp = n.putObject("spectrum");
+            sp.put("model", d.spectrum().model().key());
+            if (d.spectrum().model() == SpectrumSpec.Model.POWER_LAW) {
+                sp.put("slope", d.spectrum().slope());
+                sp.put("wavenumberRatio", d.spectrum().wavenumberRatio());
+            } else {
+                sp.put("kolmogorovLength", d.spectrum().kolmogorovLength());
+            }
+        } else if (flow instanceof TankFlow t) {
+            TankDesign d = t.design();
+            n.put("tankDiameter", d.tankDiameter());
+            n.put("liquidHeight", d.liquidHeight());
+            n.put("impellerDiameter", d.impellerDiameter());
+            n.put("impellerSpeed", d.impellerSpeed());
+            if (d.powerNumber() != null) {
+                n.put("powerNumber", d.powerNumber());
+            }
+            if (d.impellerType() != null) {
+                n.put("impellerType", d.impellerType().key());
+            }
+            n.put("kinematicViscosity", d.kinematicViscosity());
+            n.put("baffled", d.baffled());
+        } else if (flow instanceof ChannelFlow c) {
+            ChannelDesign d = c.design();
+            n.put("depth", d.depth());
+            n.put("width", d.width());
+            n.put("meanVelocity", d.meanVelocity());
+            if (d.bedSlope() != null) {
+                n.put("bedSlope", d.bedSlope());
+            }
+            if (d.shearVelocity() != null) {
+                n.put("shearVelocity", d.shearVelocity());
+            }
+            if (d.manningN() != null) {
+                n.put("manningN", d.manningN());
+            }
+            n.put("kinematicViscosity", d.kinematicViscosity());
+        } else if (flow instanceof MeasuredFlow m) {
+            n.put("record", m.record());
+            n.put("spectrum", m.modelSpectrum() ? "model" : "power-law");
+            optional(n, "samplingRate", m.samplingRate());
+            n.put("despike", m.despike());
+            n.put("detrend", m.detrend());
+            n.put("kinematicViscosity", m.kinematicViscosity());
+        } else if (flow instanceof VerificationFlow v) {
+            n.put("dimensions", v.dimensions());
+            n.put("amplitude", v.amplitude());
+            n.put("wavenumber", v.wavenumber());
+            optional(n, "correlationTime", v.correlationTime());
+            if (v.type() == VerificationFlow.Type.BELTRAMI) {
+                ObjectNode c = n.putObject("coefficients");
+                c.put("a", v.coefficients()[0]);
+                c.put("b", v.coefficients()[1]);
+                c.put("c", v.coefficients()[2]);
+            }
+        }
+    }
+
+    private static void release(ObjectNode n, Release r) {
+        n.put("mass", r.mass());
+        optional(n, "rate", r.rate());
+        n.put("location", r.atBank() ? "bank" : "centre-line");
+        if (r.position() != null) {
+            ObjectNode p = n.putObject("position");
+            p.put("x", r.position()[0]);
+            p.put("y", r.position()[1]);
+            p.put("z", r.position()[2]);
+        }
+    }
+
+    private static void simulation(ObjectNode n, SimulationSettings s) {
+        n.put("particles", s.particles());
+        n.put("groupSize", s.groupSize());
+        n.put("modes", s.modes());
+        n.put("integrator", s.integrator().key());
+        optional(n, "timeStep", s.timeStep());
+        optional(n, "duration", s.duration());
+        n.put("seed", s.seed());
+        optional(n, "precisionTarget", s.precisionTarget());
+        n.put("maxParticles", s.maxParticles());
+    }
+
+    /** NaN and infinity mean "not given": the field is left out. */
+    private static void optional(ObjectNode n, String field, double value) {
+        if (Double.isFinite(value)) {
+            n.put(field, value);
+        }
+    }
+}
