@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "eddycast", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Screening forecasts of tracer spreading in turbulent tanks and channels.",
-        subcommands = {RunCommand.class, CheckCommand.class, BenchCommand.class})
+        subcommands = {RunCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class})
 public final class Main implements Runnable {
 
     /** Exit status for bad input. */
@@ -36,6 +36,7 @@ public final class Main implements Runnable {
         cmd.setErr(err);
         cmd.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
             if (e instanceof IllegalArgumentException || e instanceof IOException
+                    || e instanceof org.eddycast.measure.RecordFormatException
                     || e instanceof NumericalBlowupException) {
                 err.println("eddycast: " + message(e));
                 return BAD_INPUT;

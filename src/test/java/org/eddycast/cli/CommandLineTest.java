@@ -65,4 +65,17 @@ class CommandLineTest {
         assertEquals(2, run("run").status());
         assertEquals(2, run("run", scenario.toString(), "--threads", "0").status());
     }
+
+    @Test
+    void analyzeWritesAFlowThatRunAccepts(@TempDir Path dir) throws Exception {
+        Path flow = dir.resolve("scenario.json");
+        Outcome o = run("analyze", "presets/records/flume-probe.csv", "--json", flow.toString(), "--scenario");
+        assertEquals(0, o.status(), o.err());
+        assertTrue(o.out().contains("dissipation rate"), o.out());
+        org.eddycast.scenario.Scenario s = org.eddycast.scenario.ScenarioReader.read(flow);
+        assertEquals("direct", s.flow().kind());
+        Outcome bad = run("analyze", "README.md");
+        assertEquals(2, bad.status());
+        assertTrue(bad.err().contains("line "), bad.err());
+    }
 }
