@@ -49,6 +49,30 @@ public record DiffusivityResult(List<AxisEstimate> axes, DisplacementMoments mom
         return componentVariance.clone();
     }
 
+    /**
+     * The same simulation in other units (a scenario with the same dimensionless case), marked as reused.
+     *
+     * @param to    the new units
+     * @param notes the new case's notes
+     */
+    public DiffusivityResult rescaled(Scales to, List<String> notes) {
+        double dRatio = to.diffusivity() / scales.diffusivity();
+        double tRatio = to.time() / scales.time();
+        List<AxisEstimate> converted = new java.util.ArrayList<>();
+        for (AxisEstimate a : axes) {
+            converted.add(new AxisEstimate(a.axis(), a.diffusivity().scaled(dRatio, tRatio),
+                    a.lagrangianTimeScale() * tRatio, a.settled(), a.earlyWindow().scaled(dRatio, tRatio)));
+        }
+        double vRatio = (to.velocity() * to.velocity()) / (scales.velocity() * scales.velocity());
+        double[] variance = componentVariance.clone();
+        for (int i = 0; i < variance.length; i++) {
+            variance[i] *= vRatio;
+        }
+        return new DiffusivityResult(converted, moments, to, kubo, peclet, molecularDiffusivity * dRatio, variance,
+                particles, blocks, steps, timeStep * tRatio, threads, elapsedSeconds, true, fieldDescription,
+                warnings, notes);
+    }
+
     /** Simulated duration in seconds. */
     public double duration() {
         return steps * timeStep;

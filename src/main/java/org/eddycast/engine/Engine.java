@@ -83,7 +83,7 @@ public final class Engine {
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel) {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
-        DiffusivityResult r = DiffusivityStudy.run(c, threads, listener, cancel);
-        return new StudyResult(s, flow, r, ToolVersion.get(), Instant.now());
+        DiffusivityResult r = SimulationCache.shared().run(c, threads, listener, cancel);
+        return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r), ToolVersion.get(), Instant.now());
     }
 }

@@ -6,6 +6,9 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Comparison;
+import org.eddycast.forecast.Forecast;
+import org.eddycast.forecast.HandbookEstimate;
 import org.eddycast.scenario.Derivation;
 import org.eddycast.scenario.TurbulenceStatistics;
 import org.eddycast.stats.AxisEstimate;
@@ -68,6 +71,11 @@ public final class ResultJson {
         ArrayNode notes = root.putArray("notes");
         r.notes().forEach(notes::add);
         root.set("meanSquareDisplacement", curve(r));
+        if (study.forecast() != null) {
+            forecast(root, study.forecast());
+        }
+        ArrayNode flowWarnings = root.putArray("flowWarnings");
+        study.flow().warnings().forEach(flowWarnings::add);
         return root;
     }
 
@@ -77,6 +85,76 @@ public final class ResultJson {
             return MAPPER.writeValueAsString(of(study));
         } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
             throw new IllegalStateException(e);
+        }
+    }
+
+    static void forecast(ObjectNode root, Forecast f) {
+        ObjectNode node = root.putObject("forecast");
+        node.put("grid", f.inDistance() ? "distance downstream (m)" : "time (s)");
+        node.put("widthMeasure", f.measure().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        node.put("widthMeasureDefinition", f.measure().label() + "; width = " + String.format(java.util.Locale.ROOT,
+                "%.4f", f.widthFactor()) + " x standard deviation");
+        node.put("simulatedUntil", f.simulatedUntil());
+        array(node, f.inDistance() ? "distance" : "time", f.grid());
+        array(node, "time", f.times());
+        ObjectNode widths = node.putObject("width");
+        widths.put("unit", "m");
+        String[] names = {"x", "y", "z"};
+        for (int a = 0; a < 3; a++) {
+            ObjectNode axis = widths.putObject(names[a]);
+            array(axis, "value", f.width()[a]);
+            array(axis, "low", f.widthLow()[a]);
+            array(axis, "high", f.widthHigh()[a]);
+        }
+        ObjectNode peak = node.putObject("peakConcentration");
+        peak.put("unit", "kg/m^3");
+        peak.put("release", "instantaneous");
+        array(peak, "value", f.peakConcentration());
+        ArrayNode mixing = node.putArray("mixing");
+        for (Forecast.MixingFigure m : f.mixing()) {
+            ObjectNode o = mixing.addObject();
+            o.put("name", m.name());
+            number(o, "value", m.value());
+            number(o, "low", m.low());
+            number(o, "high", m.high());
+            o.put("unit", m.unit());
+            o.put("method", m.method());
+        }
+        ArrayNode handbook = root.putArray("handbook");
+        for (Comparison c : f.handbook()) {
+            ObjectNode o = handbook.addObject();
+            HandbookEstimate e = c.estimate();
+            o.put("name", e.name());
+            number(o, "value", e.value());
+            number(o, "low", e.low());
+            number(o, "high", e.high());
+            o.put("unit", e.unit());
+            o.put("formula", e.formula());
+            o.put("source", e.sourceText());
+            o.put("validity", e.validity());
+            number(o, "simulated", c.forecast());
+            number(o, "ratio", c.ratio());
+            o.put("agree", c.agree());
+            o.put("summary", c.summary());
+            ArrayNode reasons = o.putArray("likelyReasons");
+            c.likelyReasons().forEach(reasons::add);
+            ArrayNode w = o.putArray("warnings");
+            e.warnings().forEach(w::add);
+        }
+        ArrayNode assumptions = root.putArray("assumptions");
+        f.assumptions().forEach(assumptions::add);
+        ArrayNode cautions = root.putArray("cautions");
+        f.cautions().forEach(cautions::add);
+    }
+
+    private static void array(ObjectNode node, String field, double[] values) {
+        ArrayNode a = node.putArray(field);
+        for (double v : values) {
+            if (Double.isFinite(v)) {
+                a.add(v);
+            } else {
+                a.addNull();
+            }
         }
     }
 

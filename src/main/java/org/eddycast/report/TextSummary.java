@@ -3,6 +3,8 @@ package org.eddycast.report;
 import java.util.Locale;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Comparison;
+import org.eddycast.forecast.Forecast;
 import org.eddycast.stats.AxisEstimate;
 import org.eddycast.stats.SlopeEstimate;
 
@@ -30,11 +32,53 @@ public final class TextSummary {
         sb.append(String.format(Locale.ROOT, "  %d particles in %d blocks, %d steps of %.4g s (%.4g s simulated), "
                         + "%d threads, %.1f s%s%n", r.particles(), r.blocks(), r.steps(), r.timeStep(), r.duration(),
                 r.threads(), r.elapsedSeconds(), r.fromCache() ? " (reused)" : ""));
+        if (s.turbulence() != null && !s.turbulence().derivations().isEmpty()) {
+            sb.append("  turbulence statistics from the ").append(s.scenario().flow().kind()).append(" route:\n");
+            for (org.eddycast.scenario.Derivation d : s.turbulence().derivations()) {
+                sb.append(String.format(Locale.ROOT, "    %-26s %10.4g %-6s %s%n", d.quantity(), d.value(), d.unit(),
+                        d.source()));
+            }
+        }
+        for (String w : s.flow().warnings()) {
+            sb.append("  WARNING (flow): ").append(w).append('\n');
+        }
+        Forecast f = s.forecast();
+        if (f != null) {
+            sb.append(String.format(Locale.ROOT, "  forecast (%s; %s):%n", f.inDistance() ? "distance downstream"
+                    : "time", f.measure().label()));
+            String unit = f.inDistance() ? "m" : "s";
+            sb.append(String.format(Locale.ROOT, "    %12s %12s %12s %12s %14s%n", f.inDistance() ? "distance m"
+                    : "time s", "width x m", "width y m", "width z m", "peak kg/m^3"));
+            double[] grid = f.grid();
+            double[][] w = f.width();
+            double[] peak = f.peakConcentration();
+            for (int j = 9; j < grid.length; j += 10) {
+                sb.append(String.format(Locale.ROOT, "    %12.4g %12.4g %12.4g %12.4g %14.4g%n", grid[j], w[0][j],
+                        w[1][j], w[2][j], peak[j]));
+            }
+            for (Forecast.MixingFigure m : f.mixing()) {
+                sb.append(String.format(Locale.ROOT, "  %s: %.4g %s [%.4g, %.4g]%n", m.name(), m.value(), m.unit(),
+                        m.low(), m.high()));
+            }
+            for (Comparison c : f.handbook()) {
+                sb.append(String.format(Locale.ROOT, "  handbook %s: %.4g %s (%s); simulated %.4g, ratio %.2f, %s%n",
+                        c.estimate().name(), c.estimate().value(), c.estimate().unit(), c.estimate().sourceText(),
+                        c.forecast(), c.ratio(), c.agree() ? "agree within the stated uncertainty" : "disagree"));
+            }
+            sb.append("  widths use ").append(unit.equals("m") ? "x = U t; " : "").append("see the JSON for the full "
+                    + "grid, bands and assumptions\n");
+        }
         for (String n : r.notes()) {
             sb.append("  note: ").append(n).append('\n');
         }
         for (String w : r.warnings()) {
             sb.append("  WARNING: ").append(w).append('\n');
+        }
+        if (f != null) {
+            sb.append("  cautions:\n");
+            for (String c : f.cautions()) {
+                sb.append("    - ").append(c).append('\n');
+            }
         }
         return sb.toString();
     }

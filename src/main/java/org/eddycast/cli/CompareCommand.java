@@ -1,0 +1,82 @@
+package org.eddycast.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.eddycast.engine.Engine;
+import org.eddycast.engine.OptionComparison;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.report.ResultJson;
+import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.scenario.ScenarioReader;
+import org.eddycast.stats.AxisEstimate;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code compare A.json B.json ...}: design options side by side with a plain verdict. */
+@Command(name = "compare", mixinStandardHelpOptions = true,
+        description = "Run two or more scenarios (the options of one design question) and compare them.")
+final class CompareCommand implements Callable<Integer> {
+
+    @Parameters(arity = "2..*", paramLabel = "SCENARIO", description = "Scenario files, two or more.")
+    List<Path> scenarios;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "Write every option's result and the verdict as JSON.")
+    Path json;
+
+    @Mixin
+    ThreadsOption threads;
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter out = spec.commandLine().getOut();
+        List<StudyResult> results = new ArrayList<>();
+        for (Path p : scenarios) {
+            results.add(Engine.run(ScenarioReader.read(p), threads.resolve(),
+                    new ProgressPrinter(spec.commandLine().getErr(), ProgressPrinter.terminal()), new Cancellation()));
+        }
+        out.printf(Locale.ROOT, "%-48s %12s %12s %12s %s%n", "option", "D_x m^2/s", "D_y m^2/s", "D_z m^2/s",
+                "first mixing figure");
+        for (StudyResult r : results) {
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-48.48s", r.scenario().name()));
+            for (AxisEstimate a : r.diffusivity().axes()) {
+                row.append(String.format(Locale.ROOT, " %12.4g", a.diffusivity().value()));
+            }
+            if (r.forecast() != null && !r.forecast().mixing().isEmpty()) {
+                var m = r.forecast().mixing().get(0);
+                row.append(String.format(Locale.ROOT, " %s %.4g %s", m.name(), m.value(), m.unit()));
+            }
+            if (r.diffusivity().fromCache()) {
+                row.append(" (simulation reused: same dimensionless case)");
+            }
+            out.println(row);
+        }
+        List<String> verdict = OptionComparison.verdict(results);
+        verdict.forEach(out::println);
+        if (json != null) {
+            ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+            ObjectNode root = mapper.createObjectNode();
+            ArrayNode options = root.putArray("options");
+            results.forEach(r -> options.add(ResultJson.of(r)));
+            ArrayNode v = root.putArray("verdict");
+            verdict.forEach(v::add);
+            AtomicFiles.writeString(json, mapper.writeValueAsString(root));
+            out.println("comparison written to " + json);
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,99 @@
+package org.eddycast.engine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.eddycast.forecast.Forecast;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.particles.RunListener;
+import org.eddycast.scenario.Scenario;
+import org.eddycast.scenario.ScenarioReader;
+import org.eddycast.stats.AxisEstimate;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The forecast against Taylor's two limits (Taylor 1921, "Diffusion by continuous movements", Proc. London
+ * Math. Soc. s2-20:196): late, sigma^2 = 2 D t with the engine's D inside its interval; early, sigma^2 = u'^2 t^2.
+ */
+class ForecastBuilderTest {
+
+    private static StudyResult run(String preset, int particles) throws Exception {
+        String text = Files.readString(Path.of("presets", preset))
+                .replaceAll("\"particles\": \\d+", "\"particles\": " + particles);
+        Scenario s = ScenarioReader.parse(text, Path.of("presets").toAbsolutePath());
+        return Engine.run(s, 2, RunListener.NONE, new Cancellation());
+    }
+
+    @Test
+    void lateWidthsFollowTwoDtAndEarlyWidthsFollowTheBallisticLaw() throws Exception {
+        StudyResult r = run("canal-dye-test.json", 2048);
+        Forecast f = r.forecast();
+        double factor = f.widthFactor();
+        double[] t = f.times();
+        int last = t.length - 1;
+        assertTrue(t[last] > 5 * f.simulatedUntil(), "the default horizon reaches well past the simulation");
+        for (AxisEstimate a : r.diffusivity().axes()) {
+            double sigma = f.width()[a.axis()][last] / factor;
+            double apparent = sigma * sigma / (2 * t[last]);
+            // sigma^2 = sigma^2(T) + 2 D (t - T): at t = 10 T the offset is a small part; the apparent D lies
+            // within the band built from D's interval and the curve's error at T.
+            double lowSigma = f.widthLow()[a.axis()][last] / factor;
+            double highSigma = f.widthHigh()[a.axis()][last] / factor;
+            assertTrue(lowSigma <= sigma && sigma <= highSigma);
+            assertEquals(a.diffusivity().value(), apparent, 0.15 * a.diffusivity().value(),
+                    "axis " + a.axisName() + ": late variance / 2t");
+            double lowD = lowSigma * lowSigma / (2 * t[last]);
+            double highD = highSigma * highSigma / (2 * t[last]);
+            assertTrue(lowD <= a.diffusivity().high() && highD >= a.diffusivity().low(),
+                    "band consistent with D's interval");
+        }
+        double u = 0.04;
+        double sigmaEarly = f.width()[0][0] / factor;
+        // First grid point: one time step, where sigma^2 = u'^2 t^2 (1 + O(t / T_L)) plus 2 D0 t (negligible).
+        assertEquals(u * t[0], sigmaEarly, 0.15 * u * t[0], "ballistic start");
+    }
+
+    @Test
+    void everyForecastCarriesCautionsAndAssumptions() throws Exception {
+        StudyResult r = run("mixing-tank-dose.json", 1024);
+        Forecast f = r.forecast();
+        assertFalse(f.cautions().isEmpty());
+        assertTrue(f.cautions().stream().anyMatch(c -> c.contains("licensed professionals")));
+        assertTrue(f.assumptions().stream().anyMatch(a -> a.contains("homogeneous")));
+        assertEquals("blend time (every point within 5% of the final value)", f.mixing().get(0).name());
+        assertTrue(f.mixing().get(0).low() <= f.mixing().get(0).value());
+        assertTrue(f.mixing().get(0).value() <= f.mixing().get(0).high());
+        assertEquals(1, f.handbook().size(), "the blend-time correlation beside the simulated blend time");
+        // Peak concentration falls, and tends to the mixed value mass / volume in the closed box.
+        double[] peak = f.peakConcentration();
+        assertTrue(peak[0] > peak[peak.length - 1]);
+        double side = 2.0 * Math.sqrt(Math.PI) / 2;
+        double mixed = 0.5 / (side * side * 2.0);
+        assertEquals(mixed, peak[peak.length - 1], 0.06 * mixed, "peak at twice the blend time is near mixed");
+    }
+
+    @Test
+    void optionsSharingADimensionlessCaseAreSimulatedOnce() throws Exception {
+        SimulationCache.shared().clear();
+        String base = Files.readString(Path.of("presets", "canal-dye-test.json"))
+                .replaceAll("\"particles\": \\d+", "\"particles\": 1024");
+        // Doubling u', L and tau together keeps the Kubo number; D0 doubled by 4 keeps the Peclet number
+        // (Pe = u' L / D0), and time step and duration scale with L/u' (unchanged here).
+        String scaled = base.replace("\"rmsVelocity\": 0.04", "\"rmsVelocity\": 0.08")
+                .replace("\"integralLength\": 0.25", "\"integralLength\": 0.5")
+                .replace("\"molecularDiffusivity\": 4.25e-10", "\"molecularDiffusivity\": 1.7e-9");
+        StudyResult a = Engine.run(ScenarioReader.parse(base), 2, RunListener.NONE, new Cancellation());
+        StudyResult b = Engine.run(ScenarioReader.parse(scaled), 2, RunListener.NONE, new Cancellation());
+        assertFalse(a.diffusivity().fromCache());
+        assertTrue(b.diffusivity().fromCache(), "the second option reuses the first simulation");
+        double ratio = b.diffusivity().axes().get(0).diffusivity().value()
+                / a.diffusivity().axes().get(0).diffusivity().value();
+        assertEquals(4.0, ratio, 1e-9, "D scales with u' L");
+        List<String> verdict = OptionComparison.verdict(List.of(a, b));
+        assertTrue(verdict.get(0).contains("spreads the tracer faster"), verdict.toString());
+    }
+}
