@@ -80,7 +80,7 @@ public final class ScenarioForm extends JPanel {
         for (FormLayout.Section section : FormLayout.SECTIONS) {
             JLabel title = new JLabel(FormText.get(section.key()));
             title.putClientProperty("FlatLaf.styleClass", "h4");
-            add(title, "span, gaptop para, gapbottom 2");
+            add(title, "span, left, gaptop para, gapbottom 2");
             if (section.key().equals("section.flow")) {
                 add(routeLabel);
                 add(route, "wrap");
