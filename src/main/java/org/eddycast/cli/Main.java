@@ -25,7 +25,15 @@ public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** The summary sheet the no-argument run writes when there is no display. */
+    static final java.nio.file.Path HEADLESS_SHEET = java.nio.file.Path.of("eddycast-summary.pdf");
+
     public static void main(String[] args) {
+        if (args.length == 0 && !java.awt.GraphicsEnvironment.isHeadless()) {
+            // the window: built on the event thread by the standalone host; the process ends when it closes
+            org.eddycast.plugin.StandaloneHost.open(org.eddycast.ui.EddycastPlugin.ID, false);
+            return;
+        }
         System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
     }
 
@@ -59,9 +67,30 @@ public final class Main implements Runnable {
         return e.getMessage() == null ? e.toString() : e.getMessage();
     }
 
+    /**
+     * With no arguments and no display: runs the bundled preset, prints its summary and writes the summary
+     * sheet, so the first command shows the main job anywhere.
+     */
     @Override
     public void run() {
-        spec.commandLine().usage(spec.commandLine().getOut());
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        out.println("No display: running the bundled preset " + org.eddycast.ui.BundledPresets.STANDARD_NAME
+                + " in the terminal (eddycast --help lists the commands).");
+        out.flush();
+        org.eddycast.scenario.Scenario s = org.eddycast.ui.BundledPresets.standard();
+        ProgressPrinter progress = new ProgressPrinter(err, ProgressPrinter.terminal());
+        org.eddycast.engine.StudyResult r = org.eddycast.engine.Engine.run(s,
+                org.eddycast.engine.Engine.defaultThreads(), progress, new org.eddycast.particles.Cancellation());
+        progress.finish();
+        out.print(org.eddycast.report.TextSummary.of(r));
+        try {
+            org.eddycast.report.SummarySheetPdf.write(r, HEADLESS_SHEET);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        out.println("summary sheet written to " + HEADLESS_SHEET.toAbsolutePath());
+        out.flush();
     }
 
     /** The version for --version. */

@@ -32,6 +32,9 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the mean-square-displacement curves as CSV.")
     Path csv;
 
+    @Option(names = "--pdf", paramLabel = "SHEET.pdf", description = "Write the summary sheet as PDF.")
+    Path pdf;
+
     @Mixin
     ThreadsOption threads;
 
@@ -54,6 +57,10 @@ final class RunCommand implements Callable<Integer> {
         if (csv != null) {
             AtomicFiles.writeString(csv, CurveCsv.text(result.diffusivity()));
             out.println("curves written to " + csv);
+        }
+        if (pdf != null) {
+            org.eddycast.report.SummarySheetPdf.write(result, pdf);
+            out.println("summary sheet written to " + pdf);
         }
         out.flush();
         return 0;

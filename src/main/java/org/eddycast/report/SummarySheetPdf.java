@@ -1,0 +1,63 @@
+package org.eddycast.report;
+
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawerDefaultFonts;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDDocumentInformation;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.util.Matrix;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.scenario.AtomicFiles;
+
+/**
+ * Writes the summary sheet as PDF: the {@link SummarySheetLayout} drawn through a Graphics2D bridge, so charts
+ * are vector graphics and text stays text (standard PDF fonts). Written atomically.
+ */
+public final class SummarySheetPdf {
+
+    private SummarySheetPdf() {
+    }
+
+    /** The sheet of one study, with its spread and settling charts. */
+    public static void write(StudyResult result, Path target) throws IOException {
+        write(SummaryContent.of(result), defaultCharts(result), target);
+    }
+
+    /** The charts a study's sheet carries. */
+    public static List<ChartSpec> defaultCharts(StudyResult result) {
+        SpreadCurves c = SpreadCurves.of(result.diffusivity());
+        return List.of(ChartSpecs.spread(c, "Spread of the particle cloud"),
+                ChartSpecs.settling(c, result.diffusivity().axes()));
+    }
+
+    /** Writes the given content and charts. */
+    public static void write(SummaryContent content, List<ChartSpec> charts, Path target) throws IOException {
+        SummarySheetLayout layout = new SummarySheetLayout(content, charts);
+        AtomicFiles.write(target, out -> {
+            try (PDDocument doc = new PDDocument()) {
+                PDDocumentInformation info = doc.getDocumentInformation();
+                info.setTitle(content.title() + ": " + content.scenarioName());
+                info.setCreator("eddycast " + content.toolVersion());
+                for (int p = 0; p < layout.pageCount(); p++) {
+                    PDPage page = new PDPage(PDRectangle.A4);
+                    doc.addPage(page);
+                    PdfBoxGraphics2D g = new PdfBoxGraphics2D(doc, (float) SummarySheetLayout.PAGE_WIDTH,
+                            (float) SummarySheetLayout.PAGE_HEIGHT);
+                    g.setFontTextDrawer(new PdfBoxGraphics2DFontTextDrawerDefaultFonts());
+                    layout.drawPage(g, p);
+                    g.dispose();
+                    try (PDPageContentStream cs = new PDPageContentStream(doc, page)) {
+                        cs.transform(Matrix.getScaleInstance(1, 1));
+                        cs.drawForm(g.getXFormObject());
+                    }
+                }
+                doc.save(out);
+            }
+        });
+    }
+}

@@ -1,0 +1,455 @@
+package org.eddycast.ui;
+
+import java.awt.BorderLayout;
+import java.awt.event.ActionEvent;
+import java.awt.event.InputEvent;
+import java.awt.event.KeyEvent;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ExecutionException;
+import java.util.function.Consumer;
+import javax.swing.AbstractAction;
+import javax.swing.Action;
+import javax.swing.JButton;
+import javax.swing.JComponent;
+import javax.swing.JPanel;
+import javax.swing.JProgressBar;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.KeyStroke;
+import net.miginfocom.swing.MigLayout;
+import org.eddycast.engine.Engine;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.particles.RunCancelledException;
+import org.eddycast.plugin.HostContext;
+import org.eddycast.plugin.ToolPanel;
+import org.eddycast.scenario.Scenario;
+import org.eddycast.scenario.ScenarioReader;
+import org.eddycast.scenario.ScenarioWriter;
+
+/**
+ * The eddycast panel: the scenario form on the left, the results on the right, a run bar below the form.
+ * Runs go to a background worker; the form locks only the inputs that define the running simulation.
+ */
+public final class EddycastPanel implements ToolPanel {
+
+    private final HostContext host;
+    private final Dialogs dialogs;
+    private final UiPreferences prefs;
+    private final JPanel root = new JPanel(new BorderLayout());
+    private final ScenarioForm form = new ScenarioForm();
+    private final ResultsView results = new ResultsView();
+    private final JProgressBar progress = new JProgressBar(0, 1000);
+    private final Action runAction = action("Run", KeyEvent.VK_R, KeyStroke.getKeyStroke(KeyEvent.VK_R,
+            InputEvent.CTRL_DOWN_MASK), this::run);
+    private final Action cancelAction = action("Cancel run", KeyEvent.VK_C, KeyStroke.getKeyStroke(
+            KeyEvent.VK_ESCAPE, 0), this::cancel);
+    private final Action keepAction = action("Keep result as option", KeyEvent.VK_K, KeyStroke.getKeyStroke(
+            KeyEvent.VK_K, InputEvent.CTRL_DOWN_MASK), this::keepOption);
+    private final Action clearOptionsAction = action("Clear options", KeyEvent.VK_L, null,
+            () -> results.options().clear());
+    private final Action saveAction = action("Save", KeyEvent.VK_S, KeyStroke.getKeyStroke(KeyEvent.VK_S,
+            InputEvent.CTRL_DOWN_MASK), this::save);
+    private final Exports exports;
+    private final List<Consumer<StudyResult>> resultListeners = new ArrayList<>();
+    private StudyWorker worker;
+    private StudyResult lastResult;
+    private Path file;
+    private String documentName = "untitled";
+    private boolean modified;
+    private int threads = Engine.defaultThreads();
+
+    /** A panel over a host; dialogs appear over the host's window. */
+    public EddycastPanel(HostContext host) {
+        this(host, null, UiPreferences.user());
+    }
+
+    EddycastPanel(HostContext host, Dialogs dialogs, UiPreferences prefs) {
+        this.host = host;
+        this.dialogs = dialogs != null ? dialogs : Dialogs.over(host::dialogParent);
+        this.prefs = prefs;
+        this.exports = new Exports(host, this.dialogs, this::lastResult, results);
+        progress.setStringPainted(true);
+        progress.setString("Ready");
+        progress.setName("progress");
+        JButton run = new JButton(runAction);
+        run.setName("run");
+        run.putClientProperty("JButton.buttonType", "default");
+        JButton stop = new JButton(cancelAction);
+        stop.setName("cancel");
+        JButton keep = new JButton(keepAction);
+        JPanel runBar = new JPanel(new MigLayout("insets dialog, fillx", "[grow,fill][][][]"));
+        runBar.add(progress);
+        runBar.add(run, "sizegroup b");
+        runBar.add(stop, "sizegroup b");
+        runBar.add(keep);
+        JPanel left = new JPanel(new BorderLayout());
+        JScrollPane scroll = new JScrollPane(form);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        scroll.setBorder(null);
+        left.add(scroll, BorderLayout.CENTER);
+        left.add(runBar, BorderLayout.SOUTH);
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, results);
+        split.setResizeWeight(0.35);
+        split.setContinuousLayout(true);
+        root.add(split, BorderLayout.CENTER);
+        root.setPreferredSize(new java.awt.Dimension(1280, 820));
+        bindKeys(runAction, cancelAction, keepAction, saveAction);
+        form.addChangeListener(this::formChanged);
+        cancelAction.setEnabled(false);
+        keepAction.setEnabled(false);
+        contributeMenus();
+    }
+
+    private void contributeMenus() {
+        Action open = action("Open scenario\u2026", KeyEvent.VK_O, KeyStroke.getKeyStroke(KeyEvent.VK_O,
+                InputEvent.CTRL_DOWN_MASK), this::openChosen);
+        Action recent = action("Open recent\u2026", KeyEvent.VK_T, null, this::openRecent);
+        Action saveAs = action("Save as\u2026", KeyEvent.VK_A, KeyStroke.getKeyStroke(KeyEvent.VK_S,
+                InputEvent.CTRL_DOWN_MASK | InputEvent.SHIFT_DOWN_MASK), this::saveAs);
+        host.contributeMenu("&File", java.util.Arrays.asList(open, recent, saveAction, saveAs, null,
+                exports.sheetPdf(), exports.print(), exports.chartPng(), exports.chartSvg(), exports.curvesCsv()));
+        Action check = action("Self-check\u2026", KeyEvent.VK_H, null, this::selfCheck);
+        host.contributeMenu("&Run", java.util.Arrays.asList(runAction, cancelAction, null, keepAction,
+                clearOptionsAction, null, check));
+        bindKeys(open, saveAs);
+    }
+
+    @Override
+    public JComponent component() {
+        return root;
+    }
+
+    /** The form (for tests and the host). */
+    public ScenarioForm form() {
+        return form;
+    }
+
+    ResultsView results() {
+        return results;
+    }
+
+    /** The latest finished result, or null. */
+    public StudyResult lastResult() {
+        return lastResult;
+    }
+
+    /** Whether a run is going. */
+    public boolean isRunning() {
+        return worker != null;
+    }
+
+    /** Runs after each finished run, on the event thread. */
+    public void addResultListener(Consumer<StudyResult> l) {
+        resultListeners.add(l);
+    }
+
+    /** The worker threads runs use. */
+    public void setThreads(int threads) {
+        this.threads = Math.max(1, threads);
+    }
+
+    /** The action that starts a run. */
+    public Action runAction() {
+        return runAction;
+    }
+
+    /** The action that cancels a run. */
+    public Action cancelAction() {
+        return cancelAction;
+    }
+
+    /** The action that keeps the latest result as a design option. */
+    public Action keepAction() {
+        return keepAction;
+    }
+
+    /** The progress bar's text (for tests). */
+    public String progressText() {
+        return progress.getString();
+    }
+
+    /** Shows a scenario in the form, as if opened from a file in {@code folder}. */
+    public void showScenario(Scenario s, Path folder, String name) {
+        form.load(s, folder);
+        documentName = name;
+        file = null;
+        setModified(false);
+    }
+
+    /** Opens a scenario file; a file that fails to load says why and leaves the panel as it was. */
+    public boolean open(Path f) {
+        if (!confirmDiscard()) {
+            return false;
+        }
+        Scenario s;
+        try {
+            s = ScenarioReader.read(f);
+        } catch (IOException | IllegalArgumentException e) {
+            dialogs.tell("Could not open " + f.getFileName(), message(e));
+            host.showStatus("Not opened: " + f.getFileName());
+            return false;
+        }
+        form.load(s, f.toAbsolutePath().getParent());
+        file = f.toAbsolutePath();
+        documentName = f.getFileName().toString();
+        prefs.addRecent(file);
+        setModified(false);
+        host.showStatus("Opened " + file);
+        return true;
+    }
+
+    /** Saves to a file atomically; returns false (with a message) when the form has errors or writing fails. */
+    public boolean saveTo(Path f) {
+        ScenarioForm.Check c = form.check();
+        if (!c.valid()) {
+            dialogs.tell("Not saved", "The form has problems; fix them before saving:\n"
+                    + String.join("\n", problems(c)));
+            return false;
+        }
+        try {
+            ScenarioWriter.write(c.scenario(), f);
+        } catch (IOException | RuntimeException e) {
+            dialogs.tell("Could not save " + f.getFileName(), message(e));
+            return false;
+        }
+        file = f.toAbsolutePath();
+        documentName = f.getFileName().toString();
+        form.setFolder(file.getParent());
+        prefs.addRecent(file);
+        setModified(false);
+        host.showStatus("Saved " + file);
+        return true;
+    }
+
+    private static List<String> problems(ScenarioForm.Check c) {
+        List<String> all = new ArrayList<>(c.fieldProblems().values());
+        all.addAll(c.otherProblems());
+        return all;
+    }
+
+    private static String message(Exception e) {
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "No such file: " + e.getMessage();
+        }
+        if (e instanceof org.eddycast.scenario.ScenarioException se) {
+            return String.join("\n", se.problems());
+        }
+        return e.getMessage() == null ? e.toString() : e.getMessage();
+    }
+
+    private void openChosen() {
+        host.chooseFileToOpen("Open scenario", "json").ifPresent(this::open);
+    }
+
+    private void openRecent() {
+        List<Path> recent = prefs.recentFiles();
+        if (recent.isEmpty()) {
+            host.showStatus("No recent scenario files yet.");
+            return;
+        }
+        Object choice = javax.swing.JOptionPane.showInputDialog(host.dialogParent(), "Scenario file:", "Open recent",
+                javax.swing.JOptionPane.PLAIN_MESSAGE, null, recent.toArray(), recent.get(0));
+        if (choice instanceof Path p) {
+            open(p);
+        }
+    }
+
+    private void save() {
+        if (file == null) {
+            saveAs();
+        } else {
+            saveTo(file);
+        }
+    }
+
+    private void saveAs() {
+        host.chooseFileToSave("Save scenario as", "json", file).ifPresent(this::saveTo);
+    }
+
+    @Override
+    public boolean confirmClose() {
+        return confirmDiscard();
+    }
+
+    private boolean confirmDiscard() {
+        if (!modified) {
+            return true;
+        }
+        return switch (dialogs.askUnsaved(documentName)) {
+            case SAVE -> {
+                save();
+                yield !modified;
+            }
+            case DISCARD -> true;
+            case CANCEL -> false;
+        };
+    }
+
+    @Override
+    public void dispose() {
+        if (worker != null) {
+            worker.stop();
+            worker = null;
+        }
+    }
+
+    private void formChanged() {
+        setModified(true);
+        if (lastResult != null && worker == null) {
+            results.showStale();
+        }
+    }
+
+    private void setModified(boolean m) {
+        modified = m;
+        host.documentChanged(documentName, m);
+    }
+
+    /** Starts a run of the form's scenario; with problems in the form, says what they are instead. */
+    void run() {
+        if (worker != null) {
+            return;
+        }
+        ScenarioForm.Check c = form.check();
+        if (!c.valid()) {
+            host.showStatus("Not run: " + problems(c).size() + " problem(s) in the form; each is shown under its "
+                    + "field.");
+            return;
+        }
+        form.setRunning(true);
+        runAction.setEnabled(false);
+        cancelAction.setEnabled(true);
+        keepAction.setEnabled(false);
+        progress.setValue(0);
+        progress.setString("Starting\u2026");
+        results.showRunning("Running \"" + c.scenario().name() + "\"\u2026");
+        host.showStatus("Running " + c.scenario().name());
+        worker = new StudyWorker(c.scenario(), threads, this::progressed, this::finished);
+        worker.execute();
+    }
+
+    private void progressed(StudyWorker.Progress p) {
+        if (worker == null) {
+            return;
+        }
+        progress.setValue((int) Math.round(1000 * p.fraction()));
+        String left = Double.isNaN(p.secondsLeft()) ? "estimating time left" : "about " + duration(p.secondsLeft())
+                + " left";
+        String text = String.format(Locale.ROOT, "%.0f%%, %s", 100 * p.fraction(), left);
+        progress.setString(text);
+        if (p.curves() != null && p.curves().times().length > 1) {
+            results.showPartial(p.curves(), "Running: " + text + " (curves fill in as groups of particles finish)");
+        }
+    }
+
+    private static String duration(double s) {
+        return s < 90 ? String.format(Locale.ROOT, "%.0f s", Math.ceil(s))
+                : String.format(Locale.ROOT, "%.0f min", Math.ceil(s / 60));
+    }
+
+    /** Cancels at once: the panel is free again immediately; the engine stops within a step. */
+    void cancel() {
+        if (worker == null) {
+            return;
+        }
+        StudyWorker w = worker;
+        worker = null;
+        w.stop();
+        unlock();
+        progress.setValue(0);
+        progress.setString("Cancelled");
+        if (lastResult != null) {
+            results.showResult(lastResult);
+        } else {
+            results.showEmpty();
+        }
+        host.showStatus("Run cancelled");
+    }
+
+    private void finished(StudyWorker w) {
+        if (w != worker) {
+            return;
+        }
+        worker = null;
+        unlock();
+        try {
+            lastResult = w.get();
+            progress.setValue(1000);
+            progress.setString(String.format(Locale.ROOT, "Done in %.1f s", lastResult.diffusivity()
+                    .elapsedSeconds()));
+            results.showResult(lastResult);
+            keepAction.setEnabled(true);
+            host.showStatus("Finished " + lastResult.scenario().name());
+            for (Consumer<StudyResult> l : resultListeners) {
+                l.accept(lastResult);
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            progress.setValue(0);
+            if (cause instanceof RunCancelledException) {
+                progress.setString("Cancelled");
+                return;
+            }
+            progress.setString("Failed");
+            String why = cause instanceof IllegalArgumentException || cause instanceof IOException
+                    || cause instanceof org.eddycast.particles.NumericalBlowupException
+                    ? cause.getMessage() : "internal fault: " + cause;
+            dialogs.tell("The run stopped", why);
+            host.showStatus("Run failed: " + why);
+        } catch (java.util.concurrent.CancellationException e) {
+            progress.setString("Cancelled");
+        }
+    }
+
+    private void unlock() {
+        form.setRunning(false);
+        runAction.setEnabled(true);
+        cancelAction.setEnabled(false);
+    }
+
+    private void keepOption() {
+        if (lastResult == null) {
+            return;
+        }
+        String name = lastResult.scenario().name();
+        int n = results.options().count() + 1;
+        results.options().keep("option " + (char) ('A' + (n - 1) % 26) + ": " + name, lastResult);
+        keepAction.setEnabled(false);
+        results.tabs().setSelectedIndex(results.tabs().getTabCount() - 1);
+        host.showStatus("Kept as option " + n + "; " + (n < 2 ? "keep another to compare." : "see Options."));
+    }
+
+    private void selfCheck() {
+        new SelfCheckDialog(host.dialogParent(), threads).setVisible(true);
+    }
+
+    private void bindKeys(Action... actions) {
+        for (Action a : actions) {
+            KeyStroke k = (KeyStroke) a.getValue(Action.ACCELERATOR_KEY);
+            if (k != null) {
+                root.getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).put(k, a.getValue(Action.NAME));
+                root.getActionMap().put(a.getValue(Action.NAME), a);
+            }
+        }
+    }
+
+    static Action action(String name, int mnemonic, KeyStroke key, Runnable body) {
+        AbstractAction a = new AbstractAction(name) {
+            @Override
+            public void actionPerformed(ActionEvent e) {
+                body.run();
+            }
+        };
+        a.putValue(Action.MNEMONIC_KEY, mnemonic);
+        if (key != null) {
+            a.putValue(Action.ACCELERATOR_KEY, key);
+        }
+        return a;
+    }
+}

@@ -1,0 +1,73 @@
+package org.eddycast.ui;
+
+import java.util.List;
+import java.util.function.Consumer;
+import javax.swing.SwingWorker;
+import org.eddycast.engine.Engine;
+import org.eddycast.engine.Scales;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.report.SpreadCurves;
+import org.eddycast.scenario.Scenario;
+
+/**
+ * Runs one scenario in the background. The engine reports progress on this worker's thread; the worker turns
+ * each report into plain data and hands it to the event thread through {@code publish}/{@code process}; it
+ * touches no Swing component itself.
+ */
+final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
+
+    /** A progress report: fraction done, seconds elapsed and left, and the curves so far (or null). */
+    record Progress(double fraction, double elapsedSeconds, double secondsLeft, SpreadCurves curves) {
+    }
+
+    private final Scenario scenario;
+    private final int threads;
+    private final Cancellation cancellation = new Cancellation();
+    private final Consumer<Progress> onProgress;
+    private final Consumer<StudyWorker> onDone;
+
+    StudyWorker(Scenario scenario, int threads, Consumer<Progress> onProgress, Consumer<StudyWorker> onDone) {
+        this.scenario = scenario;
+        this.threads = threads;
+        this.onProgress = onProgress;
+        this.onDone = onDone;
+    }
+
+    /** Stops the run within a step; the panel does not wait for it. */
+    void stop() {
+        cancellation.cancel();
+        cancel(false);
+    }
+
+    @Override
+    protected StudyResult doInBackground() {
+        long start = System.nanoTime();
+        Scales scales = Engine.dimensionlessCase(scenario).scales();
+        return Engine.run(scenario, threads, (fraction, partial) -> {
+            double elapsed = (System.nanoTime() - start) * 1e-9;
+            double left = fraction > 0.02 ? elapsed * (1 - fraction) / fraction : Double.NaN;
+            publish(new Progress(fraction, elapsed, left, partial == null ? null : SpreadCurves.of(partial, scales)));
+        }, cancellation);
+    }
+
+    @Override
+    protected void process(List<Progress> chunks) {
+        if (isCancelled()) {
+            return;
+        }
+        Progress latest = chunks.get(chunks.size() - 1);
+        SpreadCurves curves = null;
+        for (Progress p : chunks) {
+            if (p.curves() != null) {
+                curves = p.curves();
+            }
+        }
+        onProgress.accept(new Progress(latest.fraction(), latest.elapsedSeconds(), latest.secondsLeft(), curves));
+    }
+
+    @Override
+    protected void done() {
+        onDone.accept(this);
+    }
+}

@@ -1,0 +1,50 @@
+package org.eddycast.ui;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.prefs.Preferences;
+
+/** The panel's remembered settings, in one preferences node for the tool. */
+final class UiPreferences {
+
+    private static final String RECENT = "recent.";
+    private static final int MAX_RECENT = 6;
+
+    private final Preferences node;
+
+    UiPreferences(Preferences node) {
+        this.node = node;
+    }
+
+    static UiPreferences user() {
+        return new UiPreferences(Preferences.userRoot().node("org/eddycast/ui"));
+    }
+
+    /** The recently used scenario files, newest first. */
+    List<Path> recentFiles() {
+        List<Path> list = new ArrayList<>();
+        for (int i = 0; i < MAX_RECENT; i++) {
+            String s = node.get(RECENT + i, null);
+            if (s != null) {
+                list.add(Path.of(s));
+            }
+        }
+        return list;
+    }
+
+    /** Puts a file first in the recent list. */
+    void addRecent(Path file) {
+        List<Path> list = recentFiles();
+        Path abs = file.toAbsolutePath().normalize();
+        list.remove(abs);
+        list.add(0, abs);
+        for (int i = 0; i < MAX_RECENT; i++) {
+            if (i < list.size()) {
+                node.put(RECENT + i, list.get(i).toString());
+            } else {
+                node.remove(RECENT + i);
+            }
+        }
+    }
+}
