@@ -11,9 +11,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.eddycast.engine.Engine;
-import org.eddycast.engine.OptionComparison;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.particles.Cancellation;
+import org.eddycast.report.OptionComparison;
 import org.eddycast.report.ResultJson;
 import org.eddycast.scenario.AtomicFiles;
 import org.eddycast.scenario.ScenarioReader;
@@ -65,7 +65,8 @@ final class CompareCommand implements Callable<Integer> {
             }
             out.println(row);
         }
-        List<String> verdict = OptionComparison.verdict(results);
+        List<String> names = results.stream().map(r -> r.scenario().name()).toList();
+        List<String> verdict = List.of(OptionComparison.of(names, results).verdict());
         verdict.forEach(out::println);
         if (json != null) {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

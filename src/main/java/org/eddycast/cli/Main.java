@@ -85,7 +85,7 @@ public final class Main implements Runnable {
         progress.finish();
         out.print(org.eddycast.report.TextSummary.of(r));
         try {
-            org.eddycast.report.SummarySheetPdf.write(r, HEADLESS_SHEET);
+            org.eddycast.sheet.SummarySheetPdf.write(r, HEADLESS_SHEET);
         } catch (IOException e) {
             throw new java.io.UncheckedIOException(e);
         }

@@ -59,7 +59,7 @@ final class RunCommand implements Callable<Integer> {
             out.println("curves written to " + csv);
         }
         if (pdf != null) {
-            org.eddycast.report.SummarySheetPdf.write(result, pdf);
+            org.eddycast.sheet.SummarySheetPdf.write(result, pdf);
             out.println("summary sheet written to " + pdf);
         }
         out.flush();

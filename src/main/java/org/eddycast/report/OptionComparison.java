@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Forecast;
 import org.eddycast.stats.SlopeEstimate;
 
 /**
@@ -52,6 +53,7 @@ public record OptionComparison(List<String> names, List<String> axes, List<List<
             values.add(v);
             differs.add(d);
             if (o > 0) {
+                verdict.append(mixingSentence(names.get(o), names.get(0), options.get(o), options.get(0)));
                 if (anyDiff) {
                     verdict.append(String.format(Locale.ROOT, "\"%s\" spreads the tracer %s than \"%s\": on average"
                                     + " %.2f times its eddy diffusivity, a difference the 95%% intervals resolve. ",
@@ -65,5 +67,23 @@ public record OptionComparison(List<String> names, List<String> axes, List<List<
         }
         return new OptionComparison(List.copyOf(names), axisNames, values.stream().map(List::copyOf).toList(),
                 differs.stream().map(List::copyOf).toList(), verdict.toString().trim());
+    }
+
+    /** "name: blend time 427 s against 646 s." when both options have the same first mixing figure. */
+    private static String mixingSentence(String name, String reference, StudyResult option, StudyResult first) {
+        Forecast fo = option.forecast();
+        Forecast fr = first.forecast();
+        if (fo == null || fr == null || fo.mixing().isEmpty() || fr.mixing().isEmpty()
+                || !fo.mixing().get(0).name().equals(fr.mixing().get(0).name())) {
+            return "";
+        }
+        Forecast.MixingFigure a = fo.mixing().get(0);
+        Forecast.MixingFigure b = fr.mixing().get(0);
+        return String.format(Locale.ROOT, "%s: %.4g %s for \"%s\" against %.4g %s for \"%s\". ", capitalized(a.name()),
+                a.value(), a.unit(), name, b.value(), b.unit(), reference);
+    }
+
+    private static String capitalized(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 }

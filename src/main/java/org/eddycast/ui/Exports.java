@@ -16,13 +16,13 @@ import javax.imageio.ImageIO;
 import javax.swing.Action;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.plugin.HostContext;
-import org.eddycast.report.ChartRendering;
+import org.eddycast.sheet.ChartRendering;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.CurveCsv;
 import org.eddycast.report.SummaryContent;
-import org.eddycast.report.SummarySheetLayout;
-import org.eddycast.report.SummarySheetPdf;
-import org.eddycast.report.SummarySheetPrintable;
+import org.eddycast.sheet.SummarySheetLayout;
+import org.eddycast.sheet.SummarySheetPdf;
+import org.eddycast.sheet.SummarySheetPrintable;
 import org.eddycast.scenario.AtomicFiles;
 import org.jfree.svg.SVGGraphics2D;
 

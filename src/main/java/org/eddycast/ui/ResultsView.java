@@ -192,7 +192,7 @@ final class ResultsView extends JPanel {
 
     private static void chart(JPanel p, ChartSpec spec) {
         if (p.getComponentCount() == 1 && p.getComponent(0) instanceof ChartPanel cp) {
-            cp.setChart(org.eddycast.report.ChartRendering.chart(spec, ThemeCharts.palette(), ThemeCharts.font()));
+            cp.setChart(org.eddycast.sheet.ChartRendering.chart(spec, ThemeCharts.palette(), ThemeCharts.font()));
             return;
         }
         p.removeAll();

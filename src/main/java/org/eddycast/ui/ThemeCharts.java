@@ -4,7 +4,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.util.List;
 import javax.swing.UIManager;
-import org.eddycast.report.ChartRendering;
+import org.eddycast.sheet.ChartRendering;
 import org.eddycast.report.ChartSpec;
 import org.jfree.chart.ChartPanel;
 

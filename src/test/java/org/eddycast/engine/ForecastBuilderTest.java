@@ -93,7 +93,7 @@ class ForecastBuilderTest {
         double ratio = b.diffusivity().axes().get(0).diffusivity().value()
                 / a.diffusivity().axes().get(0).diffusivity().value();
         assertEquals(4.0, ratio, 1e-9, "D scales with u' L");
-        List<String> verdict = OptionComparison.verdict(List.of(a, b));
-        assertTrue(verdict.get(0).contains("spreads the tracer faster"), verdict.toString());
+        String verdict = org.eddycast.report.OptionComparison.of(List.of("a", "b"), List.of(a, b)).verdict();
+        assertTrue(verdict.contains("spreads the tracer faster"), verdict);
     }
 }

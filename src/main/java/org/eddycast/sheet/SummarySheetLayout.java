@@ -1,5 +1,7 @@
-package org.eddycast.report;
+package org.eddycast.sheet;
 
+import org.eddycast.report.SummaryContent;
+import org.eddycast.report.ChartSpec;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;

@@ -1,4 +1,4 @@
-package org.eddycast.report;
+package org.eddycast.sheet;
 
 import java.awt.Graphics;
 import java.awt.Graphics2D;

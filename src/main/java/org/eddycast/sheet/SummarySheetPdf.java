@@ -1,5 +1,9 @@
-package org.eddycast.report;
+package org.eddycast.sheet;
 
+import org.eddycast.report.SpreadCurves;
+import org.eddycast.report.SummaryContent;
+import org.eddycast.report.ChartSpecs;
+import org.eddycast.report.ChartSpec;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawerDefaultFonts;
 import java.io.IOException;

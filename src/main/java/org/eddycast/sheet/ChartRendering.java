@@ -1,5 +1,6 @@
-package org.eddycast.report;
+package org.eddycast.sheet;
 
+import org.eddycast.report.ChartSpec;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;

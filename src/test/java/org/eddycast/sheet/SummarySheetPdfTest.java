@@ -1,4 +1,4 @@
-package org.eddycast.report;
+package org.eddycast.sheet;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -8,6 +8,7 @@ import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.eddycast.engine.Engine;
+import org.eddycast.report.SummaryContent;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.forecast.Cautions;
 import org.eddycast.particles.Cancellation;
