@@ -75,10 +75,10 @@ public final class Main implements Runnable {
     public void run() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        out.println("No display: running the bundled preset " + org.eddycast.ui.BundledPresets.STANDARD_NAME
+        out.println("No display: running the bundled preset " + org.eddycast.scenario.BundledPresets.STANDARD_NAME
                 + " in the terminal (eddycast --help lists the commands).");
         out.flush();
-        org.eddycast.scenario.Scenario s = org.eddycast.ui.BundledPresets.standard();
+        org.eddycast.scenario.Scenario s = org.eddycast.scenario.BundledPresets.standard();
         ProgressPrinter progress = new ProgressPrinter(err, ProgressPrinter.terminal());
         org.eddycast.engine.StudyResult r = org.eddycast.engine.Engine.run(s,
                 org.eddycast.engine.Engine.defaultThreads(), progress, new org.eddycast.particles.Cancellation());

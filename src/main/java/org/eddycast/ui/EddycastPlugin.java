@@ -1,5 +1,6 @@
 package org.eddycast.ui;
 
+import org.eddycast.scenario.BundledPresets;
 import org.eddycast.engine.ToolVersion;
 import org.eddycast.plugin.HostContext;
 import org.eddycast.plugin.PluginInfo;

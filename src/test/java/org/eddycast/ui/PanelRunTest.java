@@ -1,5 +1,6 @@
 package org.eddycast.ui;
 
+import org.eddycast.scenario.BundledPresets;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;

@@ -1,12 +1,10 @@
-package org.eddycast.ui;
+package org.eddycast.scenario;
 
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import org.eddycast.scenario.Scenario;
-import org.eddycast.scenario.ScenarioReader;
 
 /** The preset a new window opens on, bundled in the jar. */
 public final class BundledPresets {
@@ -19,7 +17,7 @@ public final class BundledPresets {
 
     /** The bundled stirred-tank preset (an invented example). */
     public static Scenario standard() {
-        try (InputStream in = BundledPresets.class.getResourceAsStream("presets/" + STANDARD_NAME)) {
+        try (InputStream in = BundledPresets.class.getResourceAsStream("/presets/" + STANDARD_NAME)) {
             if (in == null) {
                 throw new IllegalStateException("the bundled preset " + STANDARD_NAME + " is missing from the jar");
             }
