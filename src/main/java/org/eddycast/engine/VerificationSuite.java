@@ -62,9 +62,9 @@ public final class VerificationSuite {
             list.add(new VerificationCase("cellular flow at Peclet 100, D_" + (axis == 0 ? "xx" : "yy"),
                     "cell-problem value 1.0692 sqrt(D0) (derived; large-Peclet law of Shraiman 1987, Phys. Rev. A "
                             + "36:261, and Rosenbluth et al. 1987, Phys. Fluids 30:2636)",
-                    cells, axis, 1.0692 * Math.sqrt(0.01), 0.003 * 1.0692 * Math.sqrt(0.01),
-                    "Strang at dt = 0.1: no bias beyond three standard errors (about 5%) even at dt = 0.4 "
-                            + "(CellularTimeStepBiasTest); second order scales that by (0.1/0.4)^2 to below 0.3%",
+                    cells, axis, 1.0692 * Math.sqrt(0.01), 0.005 * 1.0692 * Math.sqrt(0.01),
+                    "Strang at dt = 0.1: no bias beyond three standard errors (about 7%) even at dt = 0.4 "
+                            + "(CellularTimeStepBiasTest); second order scales that by (0.1/0.4)^2 to below 0.5%",
                     0.01, Integrator.STRANG, 0.1, 2000, 64, 262144));
         }
         return List.copyOf(list);
