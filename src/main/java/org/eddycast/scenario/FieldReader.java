@@ -14,6 +14,7 @@ final class FieldReader {
     private final JsonNode node;
     private final String path;
     private final List<String> problems;
+    private final java.util.Set<String> known = new java.util.LinkedHashSet<>();
 
     FieldReader(JsonNode node, String path, List<String> problems) {
         this.node = node;
@@ -26,7 +27,63 @@ final class FieldReader {
     }
 
     String name(String field) {
+        known.add(field);
         return path.isEmpty() ? field : path + "." + field;
+    }
+
+    /** Marks fields as known without reading them (fields another route of the same object reads). */
+    void allow(String... fields) {
+        known.addAll(List.of(fields));
+    }
+
+    /**
+     * Reports every field of this object that nothing asked for: a misspelt optional field would otherwise be
+     * ignored without a word and silently change the result.
+     */
+    void rejectUnknown() {
+        java.util.Iterator<String> names = node.fieldNames();
+        while (names.hasNext()) {
+            String field = names.next();
+            if (!known.contains(field)) {
+                String nearest = nearest(field);
+                problems.add((path.isEmpty() ? field : path + "." + field) + " is not used here"
+                        + (nearest == null ? "" : "; did you mean " + nearest + "?")
+                        + " (fields used here: " + String.join(", ", known) + ")");
+            }
+        }
+    }
+
+    private String nearest(String field) {
+        String best = null;
+        int bestDistance = Integer.MAX_VALUE;
+        for (String k : known) {
+            int d = distance(field.toLowerCase(Locale.ROOT), k.toLowerCase(Locale.ROOT));
+            if (d < bestDistance) {
+                bestDistance = d;
+                best = k;
+            }
+        }
+        return bestDistance <= Math.max(2, field.length() / 4) ? best : null;
+    }
+
+    /** Levenshtein edit distance. */
+    static int distance(String a, String b) {
+        int[] previous = new int[b.length() + 1];
+        int[] current = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            previous[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            current[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int substitution = previous[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
+                current[j] = Math.min(substitution, Math.min(previous[j] + 1, current[j - 1] + 1));
+            }
+            int[] swap = previous;
+            previous = current;
+            current = swap;
+        }
+        return previous[b.length()];
     }
 
     String path() {
@@ -35,6 +92,7 @@ final class FieldReader {
 
     /** A true/false value, or the default when absent. */
     boolean bool(String field, boolean fallback) {
+        known.add(field);
         JsonNode v = node.get(field);
         if (v == null || v.isNull()) {
             return fallback;
@@ -47,6 +105,7 @@ final class FieldReader {
     }
 
     boolean has(String field) {
+        known.add(field);
         return node.hasNonNull(field);
     }
 
@@ -56,6 +115,7 @@ final class FieldReader {
 
     /** The nested object, or null (with a problem recorded) when it is missing or not an object. */
     FieldReader object(String field, boolean required) {
+        known.add(field);
         JsonNode child = node.get(field);
         if (child == null || child.isNull()) {
             if (required) {
@@ -74,6 +134,7 @@ final class FieldReader {
     double number(String field, String unit, double min, double max, boolean openMin, double fallback,
                   boolean required) {
         JsonNode v = node.get(field);
+        known.add(field);
         if (v == null || v.isNull()) {
             if (required) {
                 problems.add(name(field) + " is missing: it must be a number " + range(min, max, openMin, unit));
@@ -95,6 +156,7 @@ final class FieldReader {
 
     /** A whole number in [min, max]. */
     long integer(String field, long min, long max, long fallback, boolean required) {
+        known.add(field);
         JsonNode v = node.get(field);
         String range = "a whole number from " + min + " to " + max;
         if (v == null || v.isNull()) {
@@ -117,6 +179,7 @@ final class FieldReader {
 
     /** A string, or the default when absent and not required. */
     String text(String field, String fallback, boolean required) {
+        known.add(field);
         JsonNode v = node.get(field);
         if (v == null || v.isNull()) {
             if (required) {

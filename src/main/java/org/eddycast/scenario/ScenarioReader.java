@@ -79,6 +79,13 @@ public final class ScenarioReader {
         Release release = releaseNode == null ? Release.defaults() : readRelease(releaseNode);
         FieldReader forecastNode = top.object("forecast", false);
         ForecastSettings forecast = forecastNode == null ? ForecastSettings.defaults() : readForecast(forecastNode);
+        top.rejectUnknown();
+        for (FieldReader section : new FieldReader[] {flowNode, substanceNode, simulationNode, releaseNode,
+                forecastNode}) {
+            if (section != null) {
+                section.rejectUnknown();
+            }
+        }
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
@@ -132,6 +139,7 @@ public final class ScenarioReader {
                 coefficients[0] = c.number("a", "m/s", -1e3, 1e3, false, amplitude, false);
                 coefficients[1] = c.number("b", "m/s", -1e3, 1e3, false, amplitude, false);
                 coefficients[2] = c.number("c", "m/s", -1e3, 1e3, false, amplitude, false);
+                c.rejectUnknown();
             }
         }
         VerificationFlow.Type type = VerificationFlow.Type.valueOf(kind.toUpperCase(Locale.ROOT));
@@ -161,6 +169,8 @@ public final class ScenarioReader {
                 }
                 spectrum = SpectrumSpec.modelSpectrum(eta);
             }
+            s.allow("slope", "wavenumberRatio", "kolmogorovLength");
+            s.rejectUnknown();
         }
         return new DirectFlow(dims, rms, length, tau, spectrum, mean);
     }
@@ -256,6 +266,7 @@ public final class ScenarioReader {
         if (p != null) {
             position = new double[] {p.number("x", "m", 0, 1e5, false, 0, true), p.number("y", "m", 0, 1e5, false, 0,
                     true), p.number("z", "m", 0, 1e5, false, 0, true)};
+            p.rejectUnknown();
         }
         return new Release(mass, rate, position, where.equals("bank"));
     }

@@ -104,4 +104,16 @@ class ScenarioReaderTest {
                   "substance": { "molecularDiffusivity": 1e-9 } }"""));
         assertTrue(c.getMessage().contains("give exactly one of bedSlope"), c.getMessage());
     }
+
+    @Test
+    void aMisspeltOptionalFieldIsReportedNotIgnored() {
+        String typo = EXAMPLE.replace("\"correlationTime\": 6.0", "\"corelationTime\": 6.0");
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioReader.parse(typo));
+        assertTrue(e.getMessage().contains("flow.corelationTime is not used here; did you mean correlationTime?"),
+                e.getMessage());
+        String wrongRoute = EXAMPLE.replace("\"kind\": \"direct\"", "\"kind\": \"channel\", \"depth\": 1, "
+                + "\"width\": 4, \"meanVelocity\": 0.3, \"bedSlope\": 0.001, \"kindOf\": 1");
+        ScenarioException w = assertThrows(ScenarioException.class, () -> ScenarioReader.parse(wrongRoute));
+        assertTrue(w.getMessage().contains("flow.rmsVelocity is not used here"), w.getMessage());
+    }
 }
