@@ -39,7 +39,7 @@ import org.eddycast.scenario.ScenarioWriter;
  * column; every scenario it accepts comes back unchanged through {@link ScenarioWriter} and the reader.
  * Seeds are fixed so a run is repeatable.
  */
-class ScenarioReaderProperties {
+class ScenarioReaderPropertiesTest {
 
     private static final Path PRESETS = Path.of("presets");
     private static final ObjectMapper MAPPER = new ObjectMapper();

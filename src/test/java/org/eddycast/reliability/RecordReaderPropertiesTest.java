@@ -23,7 +23,7 @@ import org.eddycast.measure.VelocityRecord;
  * failure is a {@link RecordFormatException}), every rejection names the line at fault, and a well-formed
  * record is read back sample for sample. Seeds are fixed so a run is repeatable.
  */
-class RecordReaderProperties {
+class RecordReaderPropertiesTest {
 
     /** Reads, and checks the contract: a record, or a RecordFormatException naming a line of the text. */
     private static VelocityRecord readChecked(String text) {
