@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "eddycast", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Screening forecasts of tracer spreading in turbulent tanks and channels.",
-        subcommands = {RunCommand.class, CompareCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class})
+        subcommands = {RunCommand.class, CompareCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class, MemoryCommand.class})
 public final class Main implements Runnable {
 
     /** Exit status for bad input. */

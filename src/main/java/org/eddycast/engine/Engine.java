@@ -1,7 +1,9 @@
 package org.eddycast.engine;
 
 import java.time.Instant;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.eddycast.forecast.ChannelRules;
 import org.eddycast.forecast.ModeledTurbulence;
 import org.eddycast.forecast.TankRules;
@@ -71,6 +73,32 @@ public final class Engine {
     /** The dimensionless case of a scenario. */
     public static DimensionlessCase dimensionlessCase(Scenario s) {
         return CaseBuilder.build(s, resolve(s).turbulence());
+    }
+
+    /**
+     * Checks a scenario before it runs, without simulating anything: the warnings a user should see before
+     * spending the run's time. Today one check: a time step above {@link CaseBuilder#MAX_STEP_FRACTION} of the
+     * field's shortest resolved time scale (the smaller of the correlation time and the inverse rms velocity
+     * gradient) biases the answer, so the warning names simulation.timeStep, the limit and a step to use. An
+     * empty list means nothing to report; a time step left out is chosen safely by the engine and never warned
+     * about.
+     *
+     * @throws org.eddycast.scenario.ScenarioException for a scenario the engine cannot run
+     * @throws org.eddycast.measure.RecordFormatException for a record that cannot be read
+     */
+    public static List<String> preflight(Scenario s) {
+        DimensionlessCase c = dimensionlessCase(s);
+        List<String> warnings = new ArrayList<>();
+        double shortest = c.model().shortestTimeScale() * c.scales().time();
+        double step = c.timeStep() * c.scales().time();
+        if (step > CaseBuilder.MAX_STEP_FRACTION * shortest) {
+            warnings.add(String.format(Locale.ROOT,
+                    "simulation.timeStep %.3g s is more than %.2g of the field's shortest time scale (%.3g s): the "
+                            + "answer would carry a time-step bias; use a time step below %.3g s (or leave "
+                            + "simulation.timeStep out and the engine chooses one)",
+                    step, CaseBuilder.MAX_STEP_FRACTION, shortest, CaseBuilder.DEFAULT_STEP_FRACTION * shortest));
+        }
+        return List.copyOf(warnings);
     }
 
     /**

@@ -6,10 +6,13 @@ import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.nio.file.attribute.FileTime;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.UnaryOperator;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -75,13 +78,48 @@ public final class RecordReader {
         this.gapFactor = gapFactor;
     }
 
-    /** Reads a record file (UTF-8). */
+    /**
+     * Reads a record file (UTF-8). The file's size and modification time are taken before and after reading;
+     * a file that changed meanwhile (a probe program still writing it, say) is rejected rather than read half
+     * old and half new.
+     */
     public VelocityRecord read(Path path) {
-        try (Reader in = Files.newBufferedReader(path, StandardCharsets.UTF_8)) {
-            return read(in, path.getFileName() == null ? path.toString() : path.getFileName().toString());
+        return read(path, UnaryOperator.identity());
+    }
+
+    /** As {@link #read(Path)}, with the file's reader passed through {@code wrap} (tests use it to act mid-read). */
+    VelocityRecord read(Path path, UnaryOperator<Reader> wrap) {
+        FileState before = FileState.of(path);
+        VelocityRecord record;
+        try (Reader in = wrap.apply(Files.newBufferedReader(path, StandardCharsets.UTF_8))) {
+            record = read(in, path.getFileName() == null ? path.toString() : path.getFileName().toString());
         } catch (IOException e) {
             throw new RecordFormatException(0, 0, "could not read the record file " + path + ": " + e.getMessage()
                     + " (a readable UTF-8 text file is needed)");
+        }
+        FileState after = FileState.of(path);
+        if (!before.equals(after)) {
+            throw new RecordFormatException(0, 0, "the record file " + path + " changed while it was being read ("
+                    + before.describe() + " before, " + after.describe() + " after); wait until the program"
+                    + " writing it has finished, or read a copy of it");
+        }
+        return record;
+    }
+
+    /** The size and modification time of a file: enough to see that it was written to. */
+    private record FileState(long size, FileTime modified) {
+        static FileState of(Path path) {
+            try {
+                BasicFileAttributes a = Files.readAttributes(path, BasicFileAttributes.class);
+                return new FileState(a.size(), a.lastModifiedTime());
+            } catch (IOException e) {
+                throw new RecordFormatException(0, 0, "could not read the record file " + path + ": "
+                        + e.getMessage() + " (a readable UTF-8 text file is needed)");
+            }
+        }
+
+        String describe() {
+            return size + " bytes, modified " + modified;
         }
     }
 

@@ -2,13 +2,32 @@ package org.eddycast.report;
 
 import java.util.Locale;
 import org.eddycast.engine.DiffusivityResult;
+import org.eddycast.engine.StudyResult;
 
-/** The mean-square-displacement curves of a result as CSV: time, then value and standard error per axis. */
+/**
+ * The mean-square-displacement curves of a result as CSV: time, then value and standard error per axis.
+ * A file starts with a comment line {@code # eddycast <version>, seed <seed>} so the numbers can be traced
+ * to the build and the random stream that made them.
+ */
 public final class CurveCsv {
 
     private CurveCsv() {
     }
 
+    /** The curves of a study as a CSV file: the version-and-seed comment line, then the table. */
+    public static String text(StudyResult s) {
+        return header(s.toolVersion(), s.scenario().simulation().seed()) + text(s.diffusivity());
+    }
+
+    /** The comment line that opens every curve file. */
+    public static String header(String toolVersion, long seed) {
+        return String.format(Locale.ROOT, "# eddycast %s, seed %d\n", toolVersion, seed);
+    }
+
+    /**
+     * The table alone (column names, then one row per record time), without the opening comment line: for a
+     * file, use {@link #text(StudyResult)}, which carries the version and the seed.
+     */
     public static String text(DiffusivityResult r) {
         String[] names = {"x", "y", "z"};
         int axes = r.axes().size();

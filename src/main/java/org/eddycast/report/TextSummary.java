@@ -17,7 +17,8 @@ public final class TextSummary {
     public static String of(StudyResult s) {
         DiffusivityResult r = s.diffusivity();
         StringBuilder sb = new StringBuilder();
-        sb.append(String.format(Locale.ROOT, "eddycast %s: %s%n", s.toolVersion(), s.scenario().name()));
+        sb.append(String.format(Locale.ROOT, "eddycast %s, seed %d: %s%n", s.toolVersion(),
+                s.scenario().simulation().seed(), s.scenario().name()));
         sb.append("  field: ").append(r.fieldDescription()).append('\n');
         sb.append(String.format(Locale.ROOT, "  Kubo number %s, Peclet number %s%n", number(r.kubo()),
                 number(r.peclet())));

@@ -2,18 +2,27 @@ package org.eddycast.scenario;
 
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.util.Locale;
 
 /**
  * Writes a file so that a reader sees either the old content or the whole new one, never a part: the bytes go
  * to a temporary file in the same folder, are forced to disk, and the temporary file is then moved over the
- * target. If anything fails, the old file is left as it was and the temporary file is removed.
+ * target. If anything fails (the content throws, the disk fills, the folder is read-only) the old file is left
+ * as it was, the temporary file is removed, and the {@link IOException} names the file, the cause and what to
+ * do about it.
+ *
+ * <p>Special cases: a missing folder is reported before anything is written; where the file system cannot
+ * move atomically the move falls back to a plain replace (still after the new content is complete on disk).
  */
 public final class AtomicFiles {
 
@@ -31,19 +40,20 @@ public final class AtomicFiles {
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
         if (folder != null && !Files.isDirectory(folder)) {
-            throw new IOException("the folder " + folder + " does not exist");
+            throw new IOException("could not save " + absolute + ": the folder " + folder
+                    + " does not exist (create it or choose another folder)");
         }
         Path temporary;
         try {
             temporary = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
-        } catch (AccessDeniedException e) {
-            throw new IOException("cannot write in " + folder + ": permission denied (choose another folder)", e);
+        } catch (IOException e) {
+            throw explain(absolute, e);
         }
         boolean moved = false;
         try {
             try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
                     StandardOpenOption.TRUNCATE_EXISTING);
-                 OutputStream out = java.nio.channels.Channels.newOutputStream(channel)) {
+                 OutputStream out = Channels.newOutputStream(channel)) {
                 content.writeTo(out);
                 out.flush();
                 channel.force(true);
@@ -54,6 +64,8 @@ public final class AtomicFiles {
                 Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
             }
             moved = true;
+        } catch (IOException e) {
+            throw explain(absolute, e);
         } finally {
             if (!moved) {
                 Files.deleteIfExists(temporary);
@@ -63,6 +75,30 @@ public final class AtomicFiles {
 
     /** Writes text (UTF-8) atomically. */
     public static void writeString(Path target, String text) throws IOException {
-        write(target, out -> out.write(text.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /**
+     * A failed save as a message a user can act on: the file, what went wrong, what to do, and that the
+     * previous file (if any) is unchanged. The operating system's own text is kept at the end.
+     */
+    static IOException explain(Path target, IOException e) {
+        String reason = e instanceof FileSystemException f && f.getReason() != null ? f.getReason() : e.getMessage();
+        String lower = reason == null ? "" : reason.toLowerCase(Locale.ROOT);
+        String advice;
+        if (lower.contains("no space left") || lower.contains("not enough space") || lower.contains("disk full")
+                || lower.contains("quota")) {
+            advice = "the disk is full (free some space or save to another drive)";
+        } else if (lower.contains("read-only file system")) {
+            advice = "the drive is read-only (choose a folder on a writable drive)";
+        } else if (e instanceof AccessDeniedException || lower.contains("permission denied")
+                || lower.contains("access is denied")) {
+            advice = "permission denied in " + target.getParent() + " (choose a folder you may write to)";
+        } else {
+            advice = "the file could not be written (check the drive and the folder, then save again)";
+        }
+        String previous = Files.exists(target) ? "; the previous " + target.getFileName() + " is unchanged" : "";
+        return new IOException("could not save " + target + ": " + advice + previous
+                + (reason == null ? "" : " [" + reason + "]"), e);
     }
 }
