@@ -55,7 +55,7 @@ final class RunCommand implements Callable<Integer> {
             out.println("result written to " + json);
         }
         if (csv != null) {
-            AtomicFiles.writeString(csv, CurveCsv.text(result.diffusivity()));
+            AtomicFiles.writeString(csv, CurveCsv.text(result));
             out.println("curves written to " + csv);
         }
         if (pdf != null) {

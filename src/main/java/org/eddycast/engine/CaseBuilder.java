@@ -146,4 +146,30 @@ public final class CaseBuilder {
         return new DimensionlessCase(model, sim.integrator(), d0, dt, steps, sim.groupSize(), sim.particles(),
                 sim.maxParticles(), sim.precisionTarget(), sim.seed(), scales, kubo, peclet, notes, fullKey);
     }
+
+    /**
+     * The warning for a time step above {@link #MAX_STEP_FRACTION} of the field's shortest time scale, in
+     * seconds, or null when the step is fine.
+     */
+    public static String timeStepWarning(DimensionlessCase c) {
+        double shortest = c.model().shortestTimeScale() * c.scales().time();
+        double step = c.timeStep() * c.scales().time();
+        if (step <= MAX_STEP_FRACTION * shortest) {
+            return null;
+        }
+        return String.format(Locale.ROOT,
+                "simulation.timeStep %.3g s is more than %.2g of the field's shortest time scale (%.3g s): the "
+                        + "answer would carry a time-step bias; use a time step below %.3g s (or leave "
+                        + "simulation.timeStep out and the engine chooses one)",
+                step, MAX_STEP_FRACTION, shortest, DEFAULT_STEP_FRACTION * shortest);
+    }
+
+    /** The message for particles that blew up, in seconds and naming the field to change. */
+    public static String blowupMessage(DimensionlessCase c) {
+        double shortest = c.model().shortestTimeScale() * c.scales().time();
+        return String.format(Locale.ROOT,
+                "the particle positions stopped being finite numbers: simulation.timeStep %.3g s is far too large "
+                        + "for this flow (its shortest time scale is %.3g s); use a time step below %.3g s",
+                c.timeStep() * c.scales().time(), shortest, DEFAULT_STEP_FRACTION * shortest);
+    }
 }

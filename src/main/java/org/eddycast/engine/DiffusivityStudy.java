@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.EnsembleRunner;
+import org.eddycast.particles.NumericalBlowupException;
 import org.eddycast.particles.RunListener;
 import org.eddycast.stats.AxisEstimate;
 import org.eddycast.stats.DiffusivityAnalysis;
@@ -28,6 +29,15 @@ public final class DiffusivityStudy {
      * @param cancel   set to stop; the run then throws {@link org.eddycast.particles.RunCancelledException}
      */
     public static DiffusivityResult run(DimensionlessCase c, int threads, RunListener listener, Cancellation cancel) {
+        try {
+            return simulate(c, threads, listener, cancel);
+        } catch (NumericalBlowupException e) {
+            throw new NumericalBlowupException(CaseBuilder.blowupMessage(c));
+        }
+    }
+
+    private static DiffusivityResult simulate(DimensionlessCase c, int threads, RunListener listener,
+                                              Cancellation cancel) {
         long start = System.nanoTime();
         EnsembleRunner runner = new EnsembleRunner(c.model(), c.integrator(), c.timeStep(), c.steps(),
                 c.groupSize(), c.d0(), c.seed());
@@ -64,13 +74,9 @@ public final class DiffusivityStudy {
             }
         }
         warnings.addAll(0, analysis.warnings());
-        if (c.timeStep() > CaseBuilder.MAX_STEP_FRACTION * c.model().shortestTimeScale()) {
-            warnings.add(String.format(Locale.ROOT,
-                    "the time step %.3g s is more than %.1f of the field's shortest time scale (%.3g s): the "
-                            + "answer carries a time-step bias; use a step below %.3g s",
-                    c.timeStep() * c.scales().time(), CaseBuilder.MAX_STEP_FRACTION,
-                    c.model().shortestTimeScale() * c.scales().time(),
-                    CaseBuilder.DEFAULT_STEP_FRACTION * c.model().shortestTimeScale() * c.scales().time()));
+        String stepWarning = CaseBuilder.timeStepWarning(c);
+        if (stepWarning != null) {
+            warnings.add(stepWarning);
         }
         DisplacementMoments moments = runner.moments();
         double diffusivity = c.scales().diffusivity();

@@ -3,7 +3,6 @@ package org.eddycast.engine;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.eddycast.forecast.ChannelRules;
 import org.eddycast.forecast.ModeledTurbulence;
 import org.eddycast.forecast.TankRules;
@@ -89,14 +88,9 @@ public final class Engine {
     public static List<String> preflight(Scenario s) {
         DimensionlessCase c = dimensionlessCase(s);
         List<String> warnings = new ArrayList<>();
-        double shortest = c.model().shortestTimeScale() * c.scales().time();
-        double step = c.timeStep() * c.scales().time();
-        if (step > CaseBuilder.MAX_STEP_FRACTION * shortest) {
-            warnings.add(String.format(Locale.ROOT,
-                    "simulation.timeStep %.3g s is more than %.2g of the field's shortest time scale (%.3g s): the "
-                            + "answer would carry a time-step bias; use a time step below %.3g s (or leave "
-                            + "simulation.timeStep out and the engine chooses one)",
-                    step, CaseBuilder.MAX_STEP_FRACTION, shortest, CaseBuilder.DEFAULT_STEP_FRACTION * shortest));
+        String warning = CaseBuilder.timeStepWarning(c);
+        if (warning != null) {
+            warnings.add(warning);
         }
         return List.copyOf(warnings);
     }

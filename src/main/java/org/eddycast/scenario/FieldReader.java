@@ -46,7 +46,8 @@ final class FieldReader {
             String field = names.next();
             if (!known.contains(field)) {
                 String nearest = nearest(field);
-                problems.add((path.isEmpty() ? field : path + "." + field) + " is not used here"
+                String shown = field.matches("[A-Za-z_][A-Za-z0-9_]*") ? field : "\"" + field + "\"";
+                problems.add((path.isEmpty() ? shown : path + "." + shown) + " is not used here"
                         + (nearest == null ? "" : "; did you mean " + nearest + "?")
                         + " (fields used here: " + String.join(", ", known) + ")");
             }

@@ -46,7 +46,8 @@ class CommandLineTest {
         assertTrue(root.path("dimensionless").has("kubo"));
         assertTrue(root.path("dimensionless").has("peclet"));
         assertTrue(root.path("warnings").isArray());
-        assertTrue(Files.readString(csv).startsWith("time_s,msd_x_m2"));
+        assertTrue(Files.readString(csv).startsWith("# eddycast "));
+        assertTrue(Files.readString(csv).contains("\ntime_s,msd_x_m2"));
     }
 
     @Test

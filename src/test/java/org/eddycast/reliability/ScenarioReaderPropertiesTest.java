@@ -45,10 +45,14 @@ class ScenarioReaderPropertiesTest {
     private static final ObjectMapper MAPPER = new ObjectMapper();
     private static final List<String> PRESET_TEXTS = presetTexts();
 
-    /** A field path such as flow.rmsVelocity, a top-level field, or a syntax error's line and column. */
+    /**
+     * A field path such as flow.rmsVelocity, a top-level field (known, or an unknown one named as not used), or a
+     * syntax error's line and column.
+     */
     private static final Pattern NAMES_A_FIELD_OR_LINE = Pattern.compile(
             "(^line \\d+, column \\d+: .*)|(.*\\b(flow|substance|simulation|release|forecast)(\\.[A-Za-z]+)+\\b.*)"
                     + "|(^(version|name|description|flow|substance|simulation|release|forecast)\\b.*)"
+                    + "|(^([A-Za-z0-9_.]+\\.)?([A-Za-z0-9_]+|\"[^\"]*\") is not used here.*)"
                     + "|(^flow: .*)|(^a scenario must be a JSON object .*)", Pattern.DOTALL);
 
     private static List<String> presetTexts() {
