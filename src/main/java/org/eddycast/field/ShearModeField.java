@@ -180,6 +180,51 @@ public final class ShearModeField {
         refreshAmplitudes();
     }
 
+    /**
+     * Advances every coefficient by one prepared step with standard normal variates taken from
+     * {@code normals[offset ..]}, four per mode (alpha1, beta1, alpha2, beta2; the last two unused with one
+     * polarization), and refreshes the amplitudes. A steady mode ignores its variates.
+     */
+    public void advanceAmplitudes(double[] normals, int offset) {
+        if (!anyRandomInTime) {
+            return;
+        }
+        for (int m = 0, j = offset; m < modes; m++, j += 4) {
+            double k = kick[m];
+            double rho = decay[m];
+            alpha1[m] = rho * alpha1[m] + k * normals[j];
+            beta1[m] = rho * beta1[m] + k * normals[j + 1];
+            alpha2[m] = rho * alpha2[m] + k * normals[j + 2];
+            beta2[m] = rho * beta2[m] + k * normals[j + 3];
+        }
+        refreshAmplitudes();
+    }
+
+    /** Copies mode m (geometry, coefficients, prepared transition) into slot j of the lane layout. */
+    void copyMode(int m, ModeLanes lanes, int j) {
+        lanes.kx[j] = kx[m];
+        lanes.ky[j] = ky[m];
+        lanes.kz[j] = kz[m];
+        lanes.e1x[j] = e1x[m];
+        lanes.e1y[j] = e1y[m];
+        lanes.e1z[j] = e1z[m];
+        lanes.e2x[j] = e2x[m];
+        lanes.e2y[j] = e2y[m];
+        lanes.e2z[j] = e2z[m];
+        lanes.alpha1[j] = alpha1[m];
+        lanes.alpha2[j] = alpha2[m];
+        lanes.beta1[j] = beta1[m];
+        lanes.beta2[j] = beta2[m];
+        lanes.decay[j] = decay[m];
+        lanes.kick[j] = kick[m];
+        lanes.ax[j] = ax[m];
+        lanes.ay[j] = ay[m];
+        lanes.az[j] = az[m];
+        lanes.bx[j] = bx[m];
+        lanes.by[j] = by[m];
+        lanes.bz[j] = bz[m];
+    }
+
     private void refreshAmplitudes() {
         for (int m = 0; m < modes; m++) {
             ax[m] = alpha1[m] * e1x[m] + alpha2[m] * e2x[m];
@@ -188,77 +233,6 @@ public final class ShearModeField {
             bx[m] = beta1[m] * e1x[m] + beta2[m] * e2x[m];
             by[m] = beta1[m] * e1y[m] + beta2[m] * e2y[m];
             bz[m] = beta1[m] * e1z[m] + beta2[m] * e2z[m];
-        }
-    }
-
-    /**
-     * Applies mode m's exact shear map for time h to points 0..n-1.
-     * The scratch arrays must hold at least n values; z is ignored in two dimensions.
-     */
-    public void shear(int m, double h, double[] x, double[] y, double[] z, int n,
-                      double[] phase, double[] sin, double[] cos) {
-        double k1 = kx[m];
-        double k2 = ky[m];
-        double k3 = kz[m];
-        if (dimensions == 3) {
-            for (int i = 0; i < n; i++) {
-                phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
-            }
-        } else {
-            for (int i = 0; i < n; i++) {
-                phase[i] = k1 * x[i] + k2 * y[i];
-            }
-        }
-        FastSinCos.sinCos(phase, sin, cos, n);
-        double hax = h * ax[m];
-        double hay = h * ay[m];
-        double hbx = h * bx[m];
-        double hby = h * by[m];
-        for (int i = 0; i < n; i++) {
-            x[i] += hax * cos[i] + hbx * sin[i];
-            y[i] += hay * cos[i] + hby * sin[i];
-        }
-        if (dimensions == 3) {
-            double haz = h * az[m];
-            double hbz = h * bz[m];
-            for (int i = 0; i < n; i++) {
-                z[i] += haz * cos[i] + hbz * sin[i];
-            }
-        }
-    }
-
-    /** Adds the velocity of all modes at points 0..n-1 to (vx, vy, vz). */
-    public void addVelocity(double[] x, double[] y, double[] z, int n, double[] vx, double[] vy, double[] vz,
-                            double[] phase, double[] sin, double[] cos) {
-        for (int m = 0; m < modes; m++) {
-            double k1 = kx[m];
-            double k2 = ky[m];
-            double k3 = kz[m];
-            if (dimensions == 3) {
-                for (int i = 0; i < n; i++) {
-                    phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
-                }
-            } else {
-                for (int i = 0; i < n; i++) {
-                    phase[i] = k1 * x[i] + k2 * y[i];
-                }
-            }
-            FastSinCos.sinCos(phase, sin, cos, n);
-            double a1 = ax[m];
-            double a2 = ay[m];
-            double b1 = bx[m];
-            double b2 = by[m];
-            for (int i = 0; i < n; i++) {
-                vx[i] += a1 * cos[i] + b1 * sin[i];
-                vy[i] += a2 * cos[i] + b2 * sin[i];
-            }
-            if (dimensions == 3) {
-                double a3 = az[m];
-                double b3 = bz[m];
-                for (int i = 0; i < n; i++) {
-                    vz[i] += a3 * cos[i] + b3 * sin[i];
-                }
-            }
         }
     }
 
