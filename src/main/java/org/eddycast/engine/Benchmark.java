@@ -29,8 +29,19 @@ public final class Benchmark {
                          long peakMemoryBytes, double diffusivity, double low, double high, double medianSeconds) {
     }
 
+    /** Time to a converged answer, counted from the start of the process (JIT warm-up included). */
+    public record Answer(String integrator, int threads, double secondsFromStart, double runSeconds,
+                         long particles, double worstRelativeHalfWidth, double diffusivity, double low, double high) {
+    }
+
     /** Workload size. */
     public record Workload(int particles, int steps, int modes, int repetitions) {
+        /** This workload with another size; any non-positive argument keeps the current value. */
+        public Workload with(int newParticles, int newSteps, int newModes) {
+            return new Workload(newParticles > 0 ? newParticles : particles, newSteps > 0 ? newSteps : steps,
+                    newModes > 0 ? newModes : modes, repetitions);
+        }
+
         /** The standard workload of the design notes. */
         public static Workload standard() {
             return new Workload(65_536, 2_000, 64, 3);
@@ -60,11 +71,15 @@ public final class Benchmark {
                 "benchmark");
     }
 
-    /** Measures one configuration. */
+    /**
+     * Measures one configuration: a warm-up run on an eighth of the particles, then the median over the
+     * workload's repetitions.
+     */
     public static Figure measure(Workload w, Integrator integrator, boolean shared, int threads) {
         int group = shared ? 64 : 1;
         DimensionlessCase c = workload(w, integrator, group, 1);
-        DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+        DimensionlessCase warmUp = workload(w.with(Math.max(128, w.particles() / 8), 0, 0), integrator, group, 2);
+        DiffusivityStudy.run(warmUp, threads, RunListener.NONE, new Cancellation());
         double[] seconds = new double[w.repetitions()];
         DiffusivityResult last = null;
         for (int i = 0; i < seconds.length; i++) {
@@ -105,11 +120,44 @@ public final class Benchmark {
         return sum;
     }
 
+    /**
+     * The standard workload (Strang splitting, shared realizations) run until every axis' 95% interval is
+     * within +-target of its value, adding particles in the study's fixed batches. The clock is the process's
+     * uptime, so class loading and JIT compilation count: call this first in a fresh process.
+     */
+    public static Answer timeToAnswer(int threads, double target) {
+        Workload w = Workload.standard();
+        DimensionlessCase base = workload(w, Integrator.STRANG, 64, 1);
+        DimensionlessCase c = new DimensionlessCase(base.model(), base.integrator(), base.d0(), base.timeStep(),
+                base.steps(), base.groupSize(), base.particles(), 1 << 23, target, base.seed(), base.scales(),
+                base.kubo(), base.peclet(), List.of(), "benchmark answer");
+        DiffusivityResult r = DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+        double fromStart = ManagementFactory.getRuntimeMXBean().getUptime() / 1e3;
+        double value = 0;
+        double low = 0;
+        double high = 0;
+        double worst = 0;
+        for (AxisEstimate a : r.axes()) {
+            value += a.diffusivity().value() / 3;
+            low += a.diffusivity().low() / 3;
+            high += a.diffusivity().high() / 3;
+            worst = Math.max(worst, a.diffusivity().relativeHalfWidth());
+        }
+        return new Answer(c.integrator().key(), threads, fromStart, r.elapsedSeconds(), r.particles(), worst, value,
+                low, high);
+    }
+
     /** Every integrator, shared and own realizations. */
     public static List<Figure> all(Workload w, int threads, java.util.function.Consumer<Figure> each) {
+        return select(w, threads, List.of(Integrator.values()), List.of(true, false), each);
+    }
+
+    /** The given integrators and sharing modes (true for shared realizations), in that order. */
+    public static List<Figure> select(Workload w, int threads, List<Integrator> integrators, List<Boolean> sharing,
+                                      java.util.function.Consumer<Figure> each) {
         List<Figure> figures = new ArrayList<>();
-        for (boolean shared : new boolean[] {true, false}) {
-            for (Integrator i : Integrator.values()) {
+        for (boolean shared : sharing) {
+            for (Integrator i : integrators) {
                 Figure f = measure(w, i, shared, threads);
                 each.accept(f);
                 figures.add(f);
