@@ -65,13 +65,12 @@ public final class VectorShearKernel implements ShearKernel {
         DoubleVector bz = DoubleVector.broadcast(SPECIES, cb3);
         int whole = SPECIES.loopBound(n);
         for (int i = 0; i < whole; i += SPECIES.length()) {
-            DoubleVector phase = DoubleVector.fromArray(SPECIES, px, i).mul(kx)
-                    .add(DoubleVector.fromArray(SPECIES, py, i).mul(ky))
-                    .add(DoubleVector.fromArray(SPECIES, pz, i).mul(kz));
+            DoubleVector phase = DoubleVector.fromArray(SPECIES, pz, i).fma(kz, DoubleVector.fromArray(SPECIES, py, i)
+                    .fma(ky, DoubleVector.fromArray(SPECIES, px, i).mul(kx)));
             DoubleVector shifted = phase.fma(VectorSinCos.TWO_OVER_PI, VectorSinCos.ROUNDER);
             LongVector q = shifted.reinterpretAsLongs();
             DoubleVector turns = shifted.sub(VectorSinCos.ROUNDER);
-            DoubleVector r = phase.sub(turns.mul(VectorSinCos.PIO2_HI)).sub(turns.mul(VectorSinCos.PIO2_LO));
+            DoubleVector r = turns.fma(VectorSinCos.MINUS_PIO2_LO, turns.fma(VectorSinCos.MINUS_PIO2_HI, phase));
             DoubleVector r2 = r.mul(r);
             DoubleVector sr = r2.fma(VectorSinCos.S15, VectorSinCos.S13).fma(r2, VectorSinCos.S11)
                     .fma(r2, VectorSinCos.S9).fma(r2, VectorSinCos.S7).fma(r2, VectorSinCos.S5)
@@ -108,13 +107,13 @@ public final class VectorShearKernel implements ShearKernel {
                           double[] ox, double[] oy, double[] oz, int n) {
         for (int i = 0; i < n; i += SPECIES.length()) {
             int j = o + i;
-            DoubleVector phase = DoubleVector.fromArray(SPECIES, px, i).mul(DoubleVector.fromArray(SPECIES, f.kx, j))
-                    .add(DoubleVector.fromArray(SPECIES, py, i).mul(DoubleVector.fromArray(SPECIES, f.ky, j)))
-                    .add(DoubleVector.fromArray(SPECIES, pz, i).mul(DoubleVector.fromArray(SPECIES, f.kz, j)));
+            DoubleVector phase = DoubleVector.fromArray(SPECIES, pz, i).fma(DoubleVector.fromArray(SPECIES, f.kz, j),
+                    DoubleVector.fromArray(SPECIES, py, i).fma(DoubleVector.fromArray(SPECIES, f.ky, j),
+                            DoubleVector.fromArray(SPECIES, px, i).mul(DoubleVector.fromArray(SPECIES, f.kx, j))));
             DoubleVector shifted = phase.fma(VectorSinCos.TWO_OVER_PI, VectorSinCos.ROUNDER);
             LongVector q = shifted.reinterpretAsLongs();
             DoubleVector turns = shifted.sub(VectorSinCos.ROUNDER);
-            DoubleVector r = phase.sub(turns.mul(VectorSinCos.PIO2_HI)).sub(turns.mul(VectorSinCos.PIO2_LO));
+            DoubleVector r = turns.fma(VectorSinCos.MINUS_PIO2_LO, turns.fma(VectorSinCos.MINUS_PIO2_HI, phase));
             DoubleVector r2 = r.mul(r);
             DoubleVector sr = r2.fma(VectorSinCos.S15, VectorSinCos.S13).fma(r2, VectorSinCos.S11)
                     .fma(r2, VectorSinCos.S9).fma(r2, VectorSinCos.S7).fma(r2, VectorSinCos.S5)

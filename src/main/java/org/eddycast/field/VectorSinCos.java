@@ -28,8 +28,8 @@ public final class VectorSinCos {
     public static final DoubleVector TWO_OVER_PI = DoubleVector.broadcast(SPECIES, 2.0 / Math.PI);
     /** 1.5 * 2^52. */
     public static final DoubleVector ROUNDER = DoubleVector.broadcast(SPECIES, 6755399441055744.0);
-    public static final DoubleVector PIO2_HI = DoubleVector.broadcast(SPECIES, FastSinCos.PIO2_HI);
-    public static final DoubleVector PIO2_LO = DoubleVector.broadcast(SPECIES, FastSinCos.PIO2_LO);
+    public static final DoubleVector MINUS_PIO2_HI = DoubleVector.broadcast(SPECIES, -FastSinCos.PIO2_HI);
+    public static final DoubleVector MINUS_PIO2_LO = DoubleVector.broadcast(SPECIES, -FastSinCos.PIO2_LO);
     public static final DoubleVector ONE = DoubleVector.broadcast(SPECIES, 1.0);
     public static final DoubleVector S3 = DoubleVector.broadcast(SPECIES, -1.0 / 6.0);
     public static final DoubleVector S5 = DoubleVector.broadcast(SPECIES, 1.0 / 120.0);

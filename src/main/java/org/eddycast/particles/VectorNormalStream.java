@@ -56,7 +56,7 @@ public final class VectorNormalStream extends NormalStream {
             DoubleVector shifted = phase.fma(VectorSinCos.TWO_OVER_PI, VectorSinCos.ROUNDER);
             LongVector q = shifted.reinterpretAsLongs();
             DoubleVector turns = shifted.sub(VectorSinCos.ROUNDER);
-            DoubleVector r = phase.sub(turns.mul(VectorSinCos.PIO2_HI)).sub(turns.mul(VectorSinCos.PIO2_LO));
+            DoubleVector r = turns.fma(VectorSinCos.MINUS_PIO2_LO, turns.fma(VectorSinCos.MINUS_PIO2_HI, phase));
             DoubleVector r2 = r.mul(r);
             DoubleVector sr = r2.fma(VectorSinCos.S15, VectorSinCos.S13).fma(r2, VectorSinCos.S11)
                     .fma(r2, VectorSinCos.S9).fma(r2, VectorSinCos.S7).fma(r2, VectorSinCos.S5)
