@@ -1,40 +1,50 @@
 package org.eddycast.field;
 
 /**
- * Many realizations of a sum of shear modes side by side, one per lane, laid out [mode][lane] so that a vector
- * kernel reads mode m of consecutive lanes from consecutive memory: the layout for particles that each carry
+ * Many realizations of a sum of shear modes side by side, one per lane, laid out [mode][quantity][lane] so that a
+ * vector kernel reads mode m of consecutive lanes from consecutive memory: the layout for particles that each carry
  * their own realization. Amplitudes follow the exact Ornstein-Uhlenbeck transition of {@link ShearModeField}
  * lane by lane.
  *
- * <p>A mutable workspace owned by one thread: the kernels read its arrays directly. Memory: 25 doubles per mode
- * and lane (about 800 kB for 64 modes and 64 lanes).
+ * <p>A mutable workspace owned by one thread: the kernels read its arrays directly. Memory: 21 doubles per mode
+ * and lane (about 690 kB for 64 modes and 64 lanes).
  */
 public final class ModeLanes {
 
     private final int dimensions;
     private final int modes;
     private final int width;
-    final double[] kx;
-    final double[] ky;
-    final double[] kz;
-    final double[] ax;
-    final double[] ay;
-    final double[] az;
-    final double[] bx;
-    final double[] by;
-    final double[] bz;
-    final double[] e1x;
-    final double[] e1y;
-    final double[] e1z;
-    final double[] e2x;
-    final double[] e2y;
-    final double[] e2z;
-    final double[] alpha1;
-    final double[] alpha2;
-    final double[] beta1;
-    final double[] beta2;
-    final double[] decay;
-    final double[] kick;
+    /** Quantities per mode and lane, in this order within each mode's record. */
+    static final int KX = 0;
+    static final int KY = 1;
+    static final int KZ = 2;
+    static final int AX = 3;
+    static final int AY = 4;
+    static final int AZ = 5;
+    static final int BX = 6;
+    static final int BY = 7;
+    static final int BZ = 8;
+    static final int E1X = 9;
+    static final int E1Y = 10;
+    static final int E1Z = 11;
+    static final int E2X = 12;
+    static final int E2Y = 13;
+    static final int E2Z = 14;
+    static final int ALPHA1 = 15;
+    static final int ALPHA2 = 16;
+    static final int BETA1 = 17;
+    static final int BETA2 = 18;
+    static final int DECAY = 19;
+    static final int KICK = 20;
+    static final int FIELDS = 21;
+
+    /**
+     * Every quantity, laid out [mode][quantity][lane]: quantity q of mode m for lane i is at
+     * (m * FIELDS + q) * width + i. One array rather than one per quantity, so that the quantities a kernel
+     * reads together lie a lane row apart instead of a whole array apart (arrays of equal power-of-two size
+     * would all map to the same few cache sets).
+     */
+    final double[] data;
 
     /**
      * @param dimensions 2 or 3
@@ -48,28 +58,7 @@ public final class ModeLanes {
         this.dimensions = dimensions;
         this.modes = modes;
         this.width = width;
-        int n = modes * width;
-        kx = new double[n];
-        ky = new double[n];
-        kz = new double[n];
-        ax = new double[n];
-        ay = new double[n];
-        az = new double[n];
-        bx = new double[n];
-        by = new double[n];
-        bz = new double[n];
-        e1x = new double[n];
-        e1y = new double[n];
-        e1z = new double[n];
-        e2x = new double[n];
-        e2y = new double[n];
-        e2z = new double[n];
-        alpha1 = new double[n];
-        alpha2 = new double[n];
-        beta1 = new double[n];
-        beta2 = new double[n];
-        decay = new double[n];
-        kick = new double[n];
+        data = new double[modes * FIELDS * width];
     }
 
     public int dimensions() {
@@ -91,19 +80,18 @@ public final class ModeLanes {
                     + "D; the lanes hold " + modes + " in " + dimensions + "D");
         }
         for (int m = 0; m < modes; m++) {
-            int j = m * width + lane;
-            field.copyMode(m, this, j);
+            field.copyMode(m, data, m * FIELDS * width + lane, width);
         }
     }
 
     /** Mode m's current amplitudes in the lane, copied into a and b (length 3). */
     public void amplitudes(int lane, int m, double[] a, double[] b) {
-        int j = m * width + lane;
-        a[0] = ax[j];
-        a[1] = ay[j];
-        a[2] = az[j];
-        b[0] = bx[j];
-        b[1] = by[j];
-        b[2] = bz[j];
+        int j = m * FIELDS * width + lane;
+        a[0] = data[j + AX * width];
+        a[1] = data[j + AY * width];
+        a[2] = data[j + AZ * width];
+        b[0] = data[j + BX * width];
+        b[1] = data[j + BY * width];
+        b[2] = data[j + BZ * width];
     }
 }

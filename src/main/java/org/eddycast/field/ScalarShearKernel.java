@@ -74,15 +74,17 @@ public class ScalarShearKernel implements ShearKernel {
     public void shear(ModeLanes f, int m, double h, double[] x, double[] y, double[] z) {
         int n = f.width();
         ensure(n);
-        int o = m * n;
+        int o = m * ModeLanes.FIELDS * n;
         for (int i = 0; i < n; i++) {
-            phase[i] = f.kx[o + i] * x[i] + f.ky[o + i] * y[i] + f.kz[o + i] * z[i];
+            int j = o + i;
+            phase[i] = f.data[j + ModeLanes.KX * n] * x[i] + f.data[j + ModeLanes.KY * n] * y[i]
+                    + f.data[j + ModeLanes.KZ * n] * z[i];
         }
         sinCos(phase, sin, cos, n);
         for (int i = 0; i < n; i++) {
-            x[i] += h * (f.ax[o + i] * cos[i] + f.bx[o + i] * sin[i]);
-            y[i] += h * (f.ay[o + i] * cos[i] + f.by[o + i] * sin[i]);
-            z[i] += h * (f.az[o + i] * cos[i] + f.bz[o + i] * sin[i]);
+            x[i] += h * (f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i]);
+            y[i] += h * (f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i]);
+            z[i] += h * (f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i]);
         }
     }
 
@@ -91,40 +93,42 @@ public class ScalarShearKernel implements ShearKernel {
                             double[] vx, double[] vy, double[] vz) {
         int n = f.width();
         ensure(n);
-        int o = m * n;
+        int o = m * ModeLanes.FIELDS * n;
         for (int i = 0; i < n; i++) {
-            phase[i] = f.kx[o + i] * x[i] + f.ky[o + i] * y[i] + f.kz[o + i] * z[i];
+            int j = o + i;
+            phase[i] = f.data[j + ModeLanes.KX * n] * x[i] + f.data[j + ModeLanes.KY * n] * y[i]
+                    + f.data[j + ModeLanes.KZ * n] * z[i];
         }
         sinCos(phase, sin, cos, n);
         for (int i = 0; i < n; i++) {
-            vx[i] += f.ax[o + i] * cos[i] + f.bx[o + i] * sin[i];
-            vy[i] += f.ay[o + i] * cos[i] + f.by[o + i] * sin[i];
-            vz[i] += f.az[o + i] * cos[i] + f.bz[o + i] * sin[i];
+            vx[i] += f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i];
+            vy[i] += f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i];
+            vz[i] += f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i];
         }
     }
 
     @Override
     public void advance(ModeLanes f, int m, double[] normals) {
         int n = f.width();
-        int o = m * n;
+        int o = m * ModeLanes.FIELDS * n;
         for (int i = 0; i < n; i++) {
             int j = o + i;
-            double rho = f.decay[j];
-            double k = f.kick[j];
-            double a1 = rho * f.alpha1[j] + k * normals[i];
-            double b1 = rho * f.beta1[j] + k * normals[n + i];
-            double a2 = rho * f.alpha2[j] + k * normals[2 * n + i];
-            double b2 = rho * f.beta2[j] + k * normals[3 * n + i];
-            f.alpha1[j] = a1;
-            f.beta1[j] = b1;
-            f.alpha2[j] = a2;
-            f.beta2[j] = b2;
-            f.ax[j] = a1 * f.e1x[j] + a2 * f.e2x[j];
-            f.ay[j] = a1 * f.e1y[j] + a2 * f.e2y[j];
-            f.az[j] = a1 * f.e1z[j] + a2 * f.e2z[j];
-            f.bx[j] = b1 * f.e1x[j] + b2 * f.e2x[j];
-            f.by[j] = b1 * f.e1y[j] + b2 * f.e2y[j];
-            f.bz[j] = b1 * f.e1z[j] + b2 * f.e2z[j];
+            double rho = f.data[j + ModeLanes.DECAY * n];
+            double k = f.data[j + ModeLanes.KICK * n];
+            double a1 = rho * f.data[j + ModeLanes.ALPHA1 * n] + k * normals[i];
+            double b1 = rho * f.data[j + ModeLanes.BETA1 * n] + k * normals[n + i];
+            double a2 = rho * f.data[j + ModeLanes.ALPHA2 * n] + k * normals[2 * n + i];
+            double b2 = rho * f.data[j + ModeLanes.BETA2 * n] + k * normals[3 * n + i];
+            f.data[j + ModeLanes.ALPHA1 * n] = a1;
+            f.data[j + ModeLanes.BETA1 * n] = b1;
+            f.data[j + ModeLanes.ALPHA2 * n] = a2;
+            f.data[j + ModeLanes.BETA2 * n] = b2;
+            f.data[j + ModeLanes.AX * n] = a1 * f.data[j + ModeLanes.E1X * n] + a2 * f.data[j + ModeLanes.E2X * n];
+            f.data[j + ModeLanes.AY * n] = a1 * f.data[j + ModeLanes.E1Y * n] + a2 * f.data[j + ModeLanes.E2Y * n];
+            f.data[j + ModeLanes.AZ * n] = a1 * f.data[j + ModeLanes.E1Z * n] + a2 * f.data[j + ModeLanes.E2Z * n];
+            f.data[j + ModeLanes.BX * n] = b1 * f.data[j + ModeLanes.E1X * n] + b2 * f.data[j + ModeLanes.E2X * n];
+            f.data[j + ModeLanes.BY * n] = b1 * f.data[j + ModeLanes.E1Y * n] + b2 * f.data[j + ModeLanes.E2Y * n];
+            f.data[j + ModeLanes.BZ * n] = b1 * f.data[j + ModeLanes.E1Z * n] + b2 * f.data[j + ModeLanes.E2Z * n];
         }
     }
 

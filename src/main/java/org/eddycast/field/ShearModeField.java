@@ -200,29 +200,29 @@ public final class ShearModeField {
         refreshAmplitudes();
     }
 
-    /** Copies mode m (geometry, coefficients, prepared transition) into slot j of the lane layout. */
-    void copyMode(int m, ModeLanes lanes, int j) {
-        lanes.kx[j] = kx[m];
-        lanes.ky[j] = ky[m];
-        lanes.kz[j] = kz[m];
-        lanes.e1x[j] = e1x[m];
-        lanes.e1y[j] = e1y[m];
-        lanes.e1z[j] = e1z[m];
-        lanes.e2x[j] = e2x[m];
-        lanes.e2y[j] = e2y[m];
-        lanes.e2z[j] = e2z[m];
-        lanes.alpha1[j] = alpha1[m];
-        lanes.alpha2[j] = alpha2[m];
-        lanes.beta1[j] = beta1[m];
-        lanes.beta2[j] = beta2[m];
-        lanes.decay[j] = decay[m];
-        lanes.kick[j] = kick[m];
-        lanes.ax[j] = ax[m];
-        lanes.ay[j] = ay[m];
-        lanes.az[j] = az[m];
-        lanes.bx[j] = bx[m];
-        lanes.by[j] = by[m];
-        lanes.bz[j] = bz[m];
+    /** Copies mode m (geometry, coefficients, prepared transition) into a lane record starting at slot j. */
+    void copyMode(int m, double[] data, int j, int stride) {
+        data[j + ModeLanes.KX * stride] = kx[m];
+        data[j + ModeLanes.KY * stride] = ky[m];
+        data[j + ModeLanes.KZ * stride] = kz[m];
+        data[j + ModeLanes.AX * stride] = ax[m];
+        data[j + ModeLanes.AY * stride] = ay[m];
+        data[j + ModeLanes.AZ * stride] = az[m];
+        data[j + ModeLanes.BX * stride] = bx[m];
+        data[j + ModeLanes.BY * stride] = by[m];
+        data[j + ModeLanes.BZ * stride] = bz[m];
+        data[j + ModeLanes.E1X * stride] = e1x[m];
+        data[j + ModeLanes.E1Y * stride] = e1y[m];
+        data[j + ModeLanes.E1Z * stride] = e1z[m];
+        data[j + ModeLanes.E2X * stride] = e2x[m];
+        data[j + ModeLanes.E2Y * stride] = e2y[m];
+        data[j + ModeLanes.E2Z * stride] = e2z[m];
+        data[j + ModeLanes.ALPHA1 * stride] = alpha1[m];
+        data[j + ModeLanes.ALPHA2 * stride] = alpha2[m];
+        data[j + ModeLanes.BETA1 * stride] = beta1[m];
+        data[j + ModeLanes.BETA2 * stride] = beta2[m];
+        data[j + ModeLanes.DECAY * stride] = decay[m];
+        data[j + ModeLanes.KICK * stride] = kick[m];
     }
 
     private void refreshAmplitudes() {

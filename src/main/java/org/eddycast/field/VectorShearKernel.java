@@ -38,13 +38,13 @@ public final class VectorShearKernel implements ShearKernel {
 
     @Override
     public void shear(ModeLanes f, int m, double h, double[] x, double[] y, double[] z) {
-        lanePass(f, m * f.width(), h, x, y, z, x, y, z, f.width());
+        lanePass(f, m * ModeLanes.FIELDS * f.width(), h, x, y, z, x, y, z, f.width());
     }
 
     @Override
     public void addVelocity(ModeLanes f, int m, double[] x, double[] y, double[] z,
                             double[] vx, double[] vy, double[] vz) {
-        lanePass(f, m * f.width(), 1.0, x, y, z, vx, vy, vz, f.width());
+        lanePass(f, m * ModeLanes.FIELDS * f.width(), 1.0, x, y, z, vx, vy, vz, f.width());
     }
 
     /**
@@ -105,11 +105,14 @@ public final class VectorShearKernel implements ShearKernel {
     /** As {@link #sharedPass} with each lane's own mode at offset o of the lane layout, scaled by h. */
     private void lanePass(ModeLanes f, int o, double h, double[] px, double[] py, double[] pz,
                           double[] ox, double[] oy, double[] oz, int n) {
+        double[] d = f.data;
         for (int i = 0; i < n; i += SPECIES.length()) {
             int j = o + i;
-            DoubleVector phase = DoubleVector.fromArray(SPECIES, pz, i).fma(DoubleVector.fromArray(SPECIES, f.kz, j),
-                    DoubleVector.fromArray(SPECIES, py, i).fma(DoubleVector.fromArray(SPECIES, f.ky, j),
-                            DoubleVector.fromArray(SPECIES, px, i).mul(DoubleVector.fromArray(SPECIES, f.kx, j))));
+            DoubleVector kx = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.KX * n);
+            DoubleVector ky = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.KY * n);
+            DoubleVector kz = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.KZ * n);
+            DoubleVector phase = DoubleVector.fromArray(SPECIES, pz, i).fma(kz,
+                    DoubleVector.fromArray(SPECIES, py, i).fma(ky, DoubleVector.fromArray(SPECIES, px, i).mul(kx)));
             DoubleVector shifted = phase.fma(VectorSinCos.TWO_OVER_PI, VectorSinCos.ROUNDER);
             LongVector q = shifted.reinterpretAsLongs();
             DoubleVector turns = shifted.sub(VectorSinCos.ROUNDER);
@@ -131,47 +134,51 @@ public final class VectorShearKernel implements ShearKernel {
             DoubleVector c = cb.lanewise(VectorOperators.XOR, swap)
                     .lanewise(VectorOperators.XOR, q.add(1L).and(2L).lanewise(VectorOperators.LSHL, 62))
                     .reinterpretAsDoubles().mul(h);
-            DoubleVector.fromArray(SPECIES, f.ax, j).fma(c, DoubleVector.fromArray(SPECIES, f.bx, j)
-                    .fma(s, DoubleVector.fromArray(SPECIES, ox, i))).intoArray(ox, i);
-            DoubleVector.fromArray(SPECIES, f.ay, j).fma(c, DoubleVector.fromArray(SPECIES, f.by, j)
-                    .fma(s, DoubleVector.fromArray(SPECIES, oy, i))).intoArray(oy, i);
-            DoubleVector.fromArray(SPECIES, f.az, j).fma(c, DoubleVector.fromArray(SPECIES, f.bz, j)
-                    .fma(s, DoubleVector.fromArray(SPECIES, oz, i))).intoArray(oz, i);
+            DoubleVector ax = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.AX * n);
+            DoubleVector bx = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BX * n);
+            ax.fma(c, bx.fma(s, DoubleVector.fromArray(SPECIES, ox, i))).intoArray(ox, i);
+            DoubleVector ay = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.AY * n);
+            DoubleVector by = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BY * n);
+            ay.fma(c, by.fma(s, DoubleVector.fromArray(SPECIES, oy, i))).intoArray(oy, i);
+            DoubleVector az = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.AZ * n);
+            DoubleVector bz = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BZ * n);
+            az.fma(c, bz.fma(s, DoubleVector.fromArray(SPECIES, oz, i))).intoArray(oz, i);
         }
     }
 
     @Override
     public void advance(ModeLanes f, int m, double[] normals) {
         int n = f.width();
-        int o = m * n;
+        int o = m * ModeLanes.FIELDS * n;
+        double[] d = f.data;
         for (int i = 0; i < n; i += SPECIES.length()) {
             int j = o + i;
-            DoubleVector rho = DoubleVector.fromArray(SPECIES, f.decay, j);
-            DoubleVector k = DoubleVector.fromArray(SPECIES, f.kick, j);
+            DoubleVector rho = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.DECAY * n);
+            DoubleVector k = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.KICK * n);
             DoubleVector a1 = k.mul(DoubleVector.fromArray(SPECIES, normals, i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, f.alpha1, j)));
+                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA1 * n)));
             DoubleVector b1 = k.mul(DoubleVector.fromArray(SPECIES, normals, n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, f.beta1, j)));
+                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA1 * n)));
             DoubleVector a2 = k.mul(DoubleVector.fromArray(SPECIES, normals, 2 * n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, f.alpha2, j)));
+                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA2 * n)));
             DoubleVector b2 = k.mul(DoubleVector.fromArray(SPECIES, normals, 3 * n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, f.beta2, j)));
-            a1.intoArray(f.alpha1, j);
-            b1.intoArray(f.beta1, j);
-            a2.intoArray(f.alpha2, j);
-            b2.intoArray(f.beta2, j);
-            DoubleVector e1x = DoubleVector.fromArray(SPECIES, f.e1x, j);
-            DoubleVector e1y = DoubleVector.fromArray(SPECIES, f.e1y, j);
-            DoubleVector e1z = DoubleVector.fromArray(SPECIES, f.e1z, j);
-            DoubleVector e2x = DoubleVector.fromArray(SPECIES, f.e2x, j);
-            DoubleVector e2y = DoubleVector.fromArray(SPECIES, f.e2y, j);
-            DoubleVector e2z = DoubleVector.fromArray(SPECIES, f.e2z, j);
-            a1.fma(e1x, a2.mul(e2x)).intoArray(f.ax, j);
-            a1.fma(e1y, a2.mul(e2y)).intoArray(f.ay, j);
-            a1.fma(e1z, a2.mul(e2z)).intoArray(f.az, j);
-            b1.fma(e1x, b2.mul(e2x)).intoArray(f.bx, j);
-            b1.fma(e1y, b2.mul(e2y)).intoArray(f.by, j);
-            b1.fma(e1z, b2.mul(e2z)).intoArray(f.bz, j);
+                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA2 * n)));
+            a1.intoArray(d, j + ModeLanes.ALPHA1 * n);
+            b1.intoArray(d, j + ModeLanes.BETA1 * n);
+            a2.intoArray(d, j + ModeLanes.ALPHA2 * n);
+            b2.intoArray(d, j + ModeLanes.BETA2 * n);
+            DoubleVector e1x = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1X * n);
+            DoubleVector e1y = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1Y * n);
+            DoubleVector e1z = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1Z * n);
+            DoubleVector e2x = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2X * n);
+            DoubleVector e2y = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2Y * n);
+            DoubleVector e2z = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2Z * n);
+            a1.fma(e1x, a2.mul(e2x)).intoArray(d, j + ModeLanes.AX * n);
+            a1.fma(e1y, a2.mul(e2y)).intoArray(d, j + ModeLanes.AY * n);
+            a1.fma(e1z, a2.mul(e2z)).intoArray(d, j + ModeLanes.AZ * n);
+            b1.fma(e1x, b2.mul(e2x)).intoArray(d, j + ModeLanes.BX * n);
+            b1.fma(e1y, b2.mul(e2y)).intoArray(d, j + ModeLanes.BY * n);
+            b1.fma(e1z, b2.mul(e2z)).intoArray(d, j + ModeLanes.BZ * n);
         }
     }
 
