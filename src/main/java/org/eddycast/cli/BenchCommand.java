@@ -63,12 +63,16 @@ final class BenchCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         int threadCount = threads.resolve();
         if (answer) {
+            long cpuStart = Benchmark.processCpuNanos();
             Benchmark.Answer a = Benchmark.timeToAnswer(threadCount, 0.02);
+            double cpu = (Benchmark.processCpuNanos() - cpuStart) / 1e9;
             out.printf(Locale.ROOT, "time to answer (%s, shared, %d threads, %s kernel): %.1f s from process start "
                             + "(%.1f s of simulation), %d particles, widest 95%% interval +-%.2f%%, diffusivity "
                             + "%.4f [%.4f, %.4f]%n", a.integrator(), a.threads(), KernelChoice.fastest().name()
                             .toLowerCase(Locale.ROOT), a.secondsFromStart(), a.runSeconds(), a.particles(),
                     100 * a.worstRelativeHalfWidth(), a.diffusivity(), a.low(), a.high());
+            out.printf(Locale.ROOT, "CPU time of the process: %.1f s (%.2f cores busy on average)%n", cpu,
+                    cpu / a.secondsFromStart());
             return 0;
         }
         Benchmark.Workload w = (quick ? Benchmark.Workload.quick() : Benchmark.Workload.standard())
@@ -79,13 +83,13 @@ final class BenchCommand implements Callable<Integer> {
                         + "median of %d after a warm-up; %s kernel, %d threads%n", w.particles(), w.modes(), w.steps(),
                 (double) w.particles() * w.modes() * w.steps(), w.repetitions(),
                 KernelChoice.fastest().name().toLowerCase(Locale.ROOT), threadCount);
-        out.printf(Locale.ROOT, "%-8s %-7s %7s %18s %12s %28s%n", "scheme", "sharing", "threads",
-                "mode-updates/s", "peak memory", "diffusivity (95% interval)");
+        out.printf(Locale.ROOT, "%-8s %-7s %7s %15s %15s %12s %28s%n", "scheme", "sharing", "threads",
+                "mode-updates/s", "per CPU-second", "peak memory", "diffusivity (95% interval)");
         out.flush();
         List<Benchmark.Figure> figures = Benchmark.select(w, threadCount, integrators, modesOfSharing, f -> {
-            out.printf(Locale.ROOT, "%-8s %-7s %7d %18.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(), f.sharing(),
-                    f.threads(), f.modeUpdatesPerSecond(), f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(),
-                    f.high());
+            out.printf(Locale.ROOT, "%-8s %-7s %7d %15.3g %15.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(),
+                    f.sharing(), f.threads(), f.modeUpdatesPerSecond(), f.modeUpdatesPerCpuSecond(),
+                    f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
         if (json != null) {
@@ -98,6 +102,7 @@ final class BenchCommand implements Callable<Integer> {
                 r.put("sharing", f.sharing());
                 r.put("threads", f.threads());
                 r.put("modeUpdatesPerSecond", f.modeUpdatesPerSecond());
+                r.put("modeUpdatesPerCpuSecond", f.modeUpdatesPerCpuSecond());
                 r.put("peakMemoryBytes", f.peakMemoryBytes());
                 ObjectNode d = r.putObject("diffusivity");
                 d.put("value", f.diffusivity());

@@ -25,8 +25,14 @@ import org.eddycast.stats.AxisEstimate;
 public final class Benchmark {
 
     /** One measured configuration. */
+    /**
+     * One measured configuration. Throughput is by the wall clock; the same work per CPU-second of the whole
+     * process (workers, compiler and collector) is given beside it, because on a machine shared with other
+     * work the wall clock also counts time the workers spent waiting for a core.
+     */
     public record Figure(String integrator, String sharing, int threads, double modeUpdatesPerSecond,
-                         long peakMemoryBytes, double diffusivity, double low, double high, double medianSeconds) {
+                         double modeUpdatesPerCpuSecond, long peakMemoryBytes, double diffusivity, double low,
+                         double high, double medianSeconds) {
     }
 
     /** Time to a converged answer, counted from the start of the process (JIT warm-up included). */
@@ -81,13 +87,18 @@ public final class Benchmark {
         DimensionlessCase warmUp = workload(w.with(Math.max(128, w.particles() / 8), 0, 0), integrator, group, 2);
         DiffusivityStudy.run(warmUp, threads, RunListener.NONE, new Cancellation());
         double[] seconds = new double[w.repetitions()];
+        double[] cpuSeconds = new double[w.repetitions()];
         DiffusivityResult last = null;
         for (int i = 0; i < seconds.length; i++) {
+            long cpuStart = processCpuNanos();
             last = DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
             seconds[i] = last.elapsedSeconds();
+            cpuSeconds[i] = (processCpuNanos() - cpuStart) / 1e9;
         }
         Arrays.sort(seconds);
+        Arrays.sort(cpuSeconds);
         double median = seconds[seconds.length / 2];
+        double medianCpu = cpuSeconds[cpuSeconds.length / 2];
         double work = (double) last.particles() * w.modes() * w.steps();
         double value = 0;
         double low = 0;
@@ -97,8 +108,17 @@ public final class Benchmark {
             low += a.diffusivity().low() / 3;
             high += a.diffusivity().high() / 3;
         }
-        return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median, peakMemoryBytes(),
-                value, low, high, median);
+        return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median,
+                medianCpu > 0 ? work / medianCpu : Double.NaN, peakMemoryBytes(), value, low, high, median);
+    }
+
+    /** CPU time of the whole process so far, in nanoseconds (-1 where the platform does not say). */
+    public static long processCpuNanos() {
+        java.lang.management.OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
+        if (os instanceof com.sun.management.OperatingSystemMXBean sun) {
+            return sun.getProcessCpuTime();
+        }
+        return -1;
     }
 
     /** Peak resident memory of this process (Linux VmHWM), or the sum of the JVM pools' peaks elsewhere. */

@@ -20,10 +20,20 @@ import org.eddycast.stats.DisplacementMoments;
  *
  * <p>Particles come in groups that share one realization; groups make up blocks of at least
  * {@value #MIN_BLOCK} particles, the independent units of the confidence interval. A block is advanced through
- * all its steps while its few kilobytes sit in cache and leaves only its curve of mean-square displacements at
- * the record times, so memory does not grow with the number of steps or particles. Blocks run in parallel in
- * batches of {@value #BATCH}; each has its own random stream ({@link BlockStreams}) and the batch's curves are
- * merged in block order, so the result is the same, bit for bit, for any thread count.
+ * all its steps while it sits in cache and leaves only its curve of mean-square displacements at the record
+ * times, so memory does not grow with the number of steps or particles. Shared realizations run one group at
+ * a time (the realization and the group's positions: a few kilobytes); with one realization per particle
+ * (group size 1) the whole block runs at once, particle i in lane i of a {@link ModeLanes} (21 doubles per
+ * mode and particle: about 690 kB for 64 modes and 64 particles, in the core's second-level cache).
+ *
+ * <p>Memory bound: per worker thread one block's workspace (above) and its curve (axes x records doubles);
+ * for the run, the moments (axes x records^2 doubles, about 0.45 MB for 3 axes and the schedule's ~136
+ * records) and one batch of {@value #BATCH} curves. Nothing depends on the number of steps or particles.
+ *
+ * <p>Blocks run in parallel in batches of {@value #BATCH}; each has its own random stream
+ * ({@link BlockStreams}) from which it draws its realizations, start points and the seeds of its bulk normal
+ * variates ({@link NormalStream}), and the batch's curves are merged in block order, so the result is the same,
+ * bit for bit, for any thread count.
  */
 public final class EnsembleRunner {
 

@@ -7,7 +7,8 @@ import org.eddycast.field.ShearModeField;
 /**
  * One full time step for a group of particles sharing one realization: the integrator's drift, then the
  * Brownian step of molecular diffusion x &lt;- x + sqrt(2 D0 dt) xi per axis, then the exact
- * Ornstein-Uhlenbeck update of the field's amplitudes.
+ * Ornstein-Uhlenbeck update of the field's amplitudes. The normal variates come in bulk, per step, from the
+ * block's {@link NormalStream}; the inner loops are the given {@link ShearKernel}'s.
  *
  * <p>With the Strang drift this order is the symmetric composition N(dt/2) S(dt) N(dt/2) of noise N and
  * drift S with neighbouring noise half steps merged (two exact half steps of Brownian motion and of an
