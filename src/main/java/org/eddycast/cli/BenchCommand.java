@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
                 + "2,000 steps) for every integrator, shared and own realizations.")
 final class BenchCommand implements Callable<Integer> {
 
-    @Option(names = "--quick", description = "A reduced workload (8,192 particles, 400 steps).")
+    @Option(names = "--quick", description = "A reduced workload (4,096 particles, 400 steps).")
     boolean quick;
 
     @Option(names = "--json", paramLabel = "FILE", description = "Write the figures as JSON.")

@@ -55,7 +55,7 @@ public final class Benchmark {
 
         /** A reduced workload that runs in seconds. */
         public static Workload quick() {
-            return new Workload(8_192, 400, 64, 3);
+            return new Workload(4_096, 400, 64, 3);
         }
     }
 
