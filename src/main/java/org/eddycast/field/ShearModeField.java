@@ -159,27 +159,6 @@ public final class ShearModeField {
         refreshAmplitudes();
     }
 
-    /** Advances every time-correlated coefficient by one prepared step and refreshes the amplitudes. */
-    public void advanceAmplitudes(RandomGenerator rng) {
-        if (!anyRandomInTime) {
-            return;
-        }
-        for (int m = 0; m < modes; m++) {
-            double k = kick[m];
-            if (k == 0) {
-                continue;
-            }
-            double rho = decay[m];
-            alpha1[m] = rho * alpha1[m] + k * rng.nextGaussian();
-            beta1[m] = rho * beta1[m] + k * rng.nextGaussian();
-            if (twoPolarizations[m]) {
-                alpha2[m] = rho * alpha2[m] + k * rng.nextGaussian();
-                beta2[m] = rho * beta2[m] + k * rng.nextGaussian();
-            }
-        }
-        refreshAmplitudes();
-    }
-
     /**
      * Advances every coefficient by one prepared step with standard normal variates taken from
      * {@code normals[offset ..]}, four per mode (alpha1, beta1, alpha2, beta2; the last two unused with one

@@ -18,11 +18,6 @@ public final class VectorShearKernel implements ShearKernel {
 
     private static final VectorSpecies<Double> SPECIES = VectorSinCos.SPECIES;
 
-    /** Lanes per vector on this machine. */
-    public static int lanes() {
-        return SPECIES.length();
-    }
-
     @Override
     public void shear(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n) {
         sharedPass(f.kx[m], f.ky[m], f.kz[m], h * f.ax[m], h * f.ay[m], h * f.az[m], h * f.bx[m], h * f.by[m],
