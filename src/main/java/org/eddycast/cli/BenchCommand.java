@@ -6,10 +6,13 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.eddycast.engine.Benchmark;
+import org.eddycast.particles.Integrator;
+import org.eddycast.particles.KernelChoice;
 import org.eddycast.scenario.AtomicFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -22,11 +25,32 @@ import picocli.CommandLine.Spec;
                 + "2,000 steps) for every integrator, shared and own realizations.")
 final class BenchCommand implements Callable<Integer> {
 
-    @Option(names = "--quick", description = "A reduced workload (8,192 particles, 400 steps).")
+    @Option(names = "--quick", description = "A reduced workload (4,096 particles, 400 steps).")
     boolean quick;
 
     @Option(names = "--json", paramLabel = "FILE", description = "Write the figures as JSON.")
     Path json;
+
+    @Option(names = "--answer", description = "Instead of throughput, measure the seconds from process start to "
+            + "the standard workload's diffusivity within a 95% interval of +-2% per axis (Strang, shared).")
+    boolean answer;
+
+    @Option(names = "--particles", paramLabel = "N", description = "Override the workload's particle count.")
+    int particles;
+
+    @Option(names = "--modes", paramLabel = "M", description = "Override the workload's mode count.")
+    int modes;
+
+    @Option(names = "--steps", paramLabel = "S", description = "Override the workload's step count.")
+    int steps;
+
+    @Option(names = "--scheme", paramLabel = "NAME", split = ",",
+            description = "Only these integrators (euler, lie, strang; default all).")
+    List<String> schemes;
+
+    @Option(names = "--sharing", paramLabel = "MODE", split = ",",
+            description = "Only these sharing modes (shared, own; default both).")
+    List<String> sharing;
 
     @Mixin
     ThreadsOption threads;
@@ -37,16 +61,35 @@ final class BenchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        Benchmark.Workload w = quick ? Benchmark.Workload.quick() : Benchmark.Workload.standard();
+        int threadCount = threads.resolve();
+        if (answer) {
+            long cpuStart = Benchmark.processCpuNanos();
+            Benchmark.Answer a = Benchmark.timeToAnswer(threadCount, 0.02);
+            double cpu = (Benchmark.processCpuNanos() - cpuStart) / 1e9;
+            out.printf(Locale.ROOT, "time to answer (%s, shared, %d threads, %s kernel): %.1f s from process start "
+                            + "(%.1f s of simulation), %d particles, widest 95%% interval +-%.2f%%, diffusivity "
+                            + "%.4f [%.4f, %.4f]%n", a.integrator(), a.threads(), KernelChoice.fastest().name()
+                            .toLowerCase(Locale.ROOT), a.secondsFromStart(), a.runSeconds(), a.particles(),
+                    100 * a.worstRelativeHalfWidth(), a.diffusivity(), a.low(), a.high());
+            out.printf(Locale.ROOT, "CPU time of the process: %.1f s (%.2f cores busy on average)%n", cpu,
+                    cpu / a.secondsFromStart());
+            return 0;
+        }
+        Benchmark.Workload w = (quick ? Benchmark.Workload.quick() : Benchmark.Workload.standard())
+                .with(checked(particles, "--particles"), checked(steps, "--steps"), checked(modes, "--modes"));
+        List<Integrator> integrators = integrators();
+        List<Boolean> modesOfSharing = sharingModes();
         out.printf(Locale.ROOT, "workload: %d particles, %d modes, %d steps (%.3g mode-updates per run), "
-                        + "median of %d after a warm-up%n", w.particles(), w.modes(), w.steps(),
-                (double) w.particles() * w.modes() * w.steps(), w.repetitions());
-        out.printf(Locale.ROOT, "%-8s %-7s %7s %18s %12s %28s%n", "scheme", "sharing", "threads",
-                "mode-updates/s", "peak memory", "diffusivity (95% interval)");
-        List<Benchmark.Figure> figures = Benchmark.all(w, threads.resolve(), f -> {
-            out.printf(Locale.ROOT, "%-8s %-7s %7d %18.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(), f.sharing(),
-                    f.threads(), f.modeUpdatesPerSecond(), f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(),
-                    f.high());
+                        + "median of %d after a warm-up; %s kernel, %d threads%n", w.particles(), w.modes(), w.steps(),
+                (double) w.particles() * w.modes() * w.steps(), w.repetitions(),
+                KernelChoice.fastest().name().toLowerCase(Locale.ROOT), threadCount);
+        out.printf(Locale.ROOT, "%-8s %-7s %7s %15s %15s %12s %28s%n", "scheme", "sharing", "threads",
+                "mode-updates/s", "per CPU-second", "peak memory", "diffusivity (95% interval)");
+        out.flush();
+        List<Benchmark.Figure> figures = Benchmark.select(w, threadCount, integrators, modesOfSharing, f -> {
+            out.printf(Locale.ROOT, "%-8s %-7s %7d %15.3g %15.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(),
+                    f.sharing(), f.threads(), f.modeUpdatesPerSecond(), f.modeUpdatesPerCpuSecond(),
+                    f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
         if (json != null) {
@@ -59,6 +102,7 @@ final class BenchCommand implements Callable<Integer> {
                 r.put("sharing", f.sharing());
                 r.put("threads", f.threads());
                 r.put("modeUpdatesPerSecond", f.modeUpdatesPerSecond());
+                r.put("modeUpdatesPerCpuSecond", f.modeUpdatesPerCpuSecond());
                 r.put("peakMemoryBytes", f.peakMemoryBytes());
                 ObjectNode d = r.putObject("diffusivity");
                 d.put("value", f.diffusivity());
@@ -69,5 +113,43 @@ final class BenchCommand implements Callable<Integer> {
             out.println("figures written to " + json);
         }
         return 0;
+    }
+
+    private static int checked(int value, String option) {
+        if (value < 0 || (value > 0 && value < 2)) {
+            throw new IllegalArgumentException(option + " must be a whole number of at least 2; got " + value);
+        }
+        return value;
+    }
+
+    private List<Integrator> integrators() {
+        if (schemes == null) {
+            return List.of(Integrator.values());
+        }
+        List<Integrator> list = new ArrayList<>();
+        for (String name : schemes) {
+            Integrator i = Integrator.fromKey(name.trim());
+            if (i == null) {
+                throw new IllegalArgumentException("--scheme must be euler, lie or strang; got \"" + name + "\"");
+            }
+            list.add(i);
+        }
+        return list;
+    }
+
+    private List<Boolean> sharingModes() {
+        if (sharing == null) {
+            return List.of(true, false);
+        }
+        List<Boolean> list = new ArrayList<>();
+        for (String name : sharing) {
+            switch (name.trim().toLowerCase(Locale.ROOT)) {
+                case "shared" -> list.add(true);
+                case "own" -> list.add(false);
+                default -> throw new IllegalArgumentException("--sharing must be shared or own; got \"" + name
+                        + "\"");
+            }
+        }
+        return list;
     }
 }

@@ -25,12 +25,29 @@ import org.eddycast.stats.AxisEstimate;
 public final class Benchmark {
 
     /** One measured configuration. */
+    /**
+     * One measured configuration. Throughput is by the wall clock; the same work per CPU-second of the whole
+     * process (workers, compiler and collector) is given beside it, because on a machine shared with other
+     * work the wall clock also counts time the workers spent waiting for a core.
+     */
     public record Figure(String integrator, String sharing, int threads, double modeUpdatesPerSecond,
-                         long peakMemoryBytes, double diffusivity, double low, double high, double medianSeconds) {
+                         double modeUpdatesPerCpuSecond, long peakMemoryBytes, double diffusivity, double low,
+                         double high, double medianSeconds) {
+    }
+
+    /** Time to a converged answer, counted from the start of the process (JIT warm-up included). */
+    public record Answer(String integrator, int threads, double secondsFromStart, double runSeconds,
+                         long particles, double worstRelativeHalfWidth, double diffusivity, double low, double high) {
     }
 
     /** Workload size. */
     public record Workload(int particles, int steps, int modes, int repetitions) {
+        /** This workload with another size; any non-positive argument keeps the current value. */
+        public Workload with(int newParticles, int newSteps, int newModes) {
+            return new Workload(newParticles > 0 ? newParticles : particles, newSteps > 0 ? newSteps : steps,
+                    newModes > 0 ? newModes : modes, repetitions);
+        }
+
         /** The standard workload of the design notes. */
         public static Workload standard() {
             return new Workload(65_536, 2_000, 64, 3);
@@ -38,7 +55,7 @@ public final class Benchmark {
 
         /** A reduced workload that runs in seconds. */
         public static Workload quick() {
-            return new Workload(8_192, 400, 64, 3);
+            return new Workload(4_096, 400, 64, 3);
         }
     }
 
@@ -60,19 +77,28 @@ public final class Benchmark {
                 "benchmark");
     }
 
-    /** Measures one configuration. */
+    /**
+     * Measures one configuration: a warm-up run on an eighth of the particles, then the median over the
+     * workload's repetitions.
+     */
     public static Figure measure(Workload w, Integrator integrator, boolean shared, int threads) {
         int group = shared ? 64 : 1;
         DimensionlessCase c = workload(w, integrator, group, 1);
-        DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+        DimensionlessCase warmUp = workload(w.with(Math.max(128, w.particles() / 8), 0, 0), integrator, group, 2);
+        DiffusivityStudy.run(warmUp, threads, RunListener.NONE, new Cancellation());
         double[] seconds = new double[w.repetitions()];
+        double[] cpuSeconds = new double[w.repetitions()];
         DiffusivityResult last = null;
         for (int i = 0; i < seconds.length; i++) {
+            long cpuStart = processCpuNanos();
             last = DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
             seconds[i] = last.elapsedSeconds();
+            cpuSeconds[i] = (processCpuNanos() - cpuStart) / 1e9;
         }
         Arrays.sort(seconds);
+        Arrays.sort(cpuSeconds);
         double median = seconds[seconds.length / 2];
+        double medianCpu = cpuSeconds[cpuSeconds.length / 2];
         double work = (double) last.particles() * w.modes() * w.steps();
         double value = 0;
         double low = 0;
@@ -82,8 +108,17 @@ public final class Benchmark {
             low += a.diffusivity().low() / 3;
             high += a.diffusivity().high() / 3;
         }
-        return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median, peakMemoryBytes(),
-                value, low, high, median);
+        return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median,
+                medianCpu > 0 ? work / medianCpu : Double.NaN, peakMemoryBytes(), value, low, high, median);
+    }
+
+    /** CPU time of the whole process so far, in nanoseconds (-1 where the platform does not say). */
+    public static long processCpuNanos() {
+        java.lang.management.OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
+        if (os instanceof com.sun.management.OperatingSystemMXBean sun) {
+            return sun.getProcessCpuTime();
+        }
+        return -1;
     }
 
     /** Peak resident memory of this process (Linux VmHWM), or the sum of the JVM pools' peaks elsewhere. */
@@ -105,11 +140,44 @@ public final class Benchmark {
         return sum;
     }
 
+    /**
+     * The standard workload (Strang splitting, shared realizations) run until every axis' 95% interval is
+     * within +-target of its value, adding particles in the study's fixed batches. The clock is the process's
+     * uptime, so class loading and JIT compilation count: call this first in a fresh process.
+     */
+    public static Answer timeToAnswer(int threads, double target) {
+        Workload w = Workload.standard();
+        DimensionlessCase base = workload(w, Integrator.STRANG, 64, 1);
+        DimensionlessCase c = new DimensionlessCase(base.model(), base.integrator(), base.d0(), base.timeStep(),
+                base.steps(), base.groupSize(), base.particles(), 1 << 23, target, base.seed(), base.scales(),
+                base.kubo(), base.peclet(), List.of(), "benchmark answer");
+        DiffusivityResult r = DiffusivityStudy.run(c, threads, RunListener.NONE, new Cancellation());
+        double fromStart = ManagementFactory.getRuntimeMXBean().getUptime() / 1e3;
+        double value = 0;
+        double low = 0;
+        double high = 0;
+        double worst = 0;
+        for (AxisEstimate a : r.axes()) {
+            value += a.diffusivity().value() / 3;
+            low += a.diffusivity().low() / 3;
+            high += a.diffusivity().high() / 3;
+            worst = Math.max(worst, a.diffusivity().relativeHalfWidth());
+        }
+        return new Answer(c.integrator().key(), threads, fromStart, r.elapsedSeconds(), r.particles(), worst, value,
+                low, high);
+    }
+
     /** Every integrator, shared and own realizations. */
     public static List<Figure> all(Workload w, int threads, java.util.function.Consumer<Figure> each) {
+        return select(w, threads, List.of(Integrator.values()), List.of(true, false), each);
+    }
+
+    /** The given integrators and sharing modes (true for shared realizations), in that order. */
+    public static List<Figure> select(Workload w, int threads, List<Integrator> integrators, List<Boolean> sharing,
+                                      java.util.function.Consumer<Figure> each) {
         List<Figure> figures = new ArrayList<>();
-        for (boolean shared : new boolean[] {true, false}) {
-            for (Integrator i : Integrator.values()) {
+        for (boolean shared : sharing) {
+            for (Integrator i : integrators) {
                 Figure f = measure(w, i, shared, threads);
                 each.accept(f);
                 figures.add(f);

@@ -60,9 +60,8 @@ public final class FastSinCos {
             double q = Math.rint(p * TWO_OVER_PI);
             double r = (p - q * PIO2_HI) - q * PIO2_LO;
             double r2 = r * r;
-            double s = r + r * r2 * (S3 + r2 * (S5 + r2 * (S7 + r2 * (S9 + r2 * (S11 + r2 * (S13 + r2 * S15))))));
-            double c = 1.0 + r2 * (C2 + r2 * (C4 + r2 * (C6 + r2 * (C8 + r2 * (C10 + r2 * (C12 + r2 * (C14
-                    + r2 * C16)))))));
+            double s = sinPolynomial(r, r2);
+            double c = cosPolynomial(r2);
             long quadrant = (long) q;
             boolean swap = (quadrant & 1L) != 0;
             double sv = swap ? c : s;
@@ -72,19 +71,32 @@ public final class FastSinCos {
         }
     }
 
-    /** Sine of one phase, by the same method (for tests and non-critical paths). */
+    /** Sine of one phase, by the same method. */
     public static double sin(double phase) {
-        double[] s = new double[1];
-        double[] c = new double[1];
-        sinCos(new double[] {phase}, s, c, 1);
-        return s[0];
+        double q = Math.rint(phase * TWO_OVER_PI);
+        double r = (phase - q * PIO2_HI) - q * PIO2_LO;
+        double r2 = r * r;
+        long quadrant = (long) q;
+        double v = (quadrant & 1L) != 0 ? cosPolynomial(r2) : sinPolynomial(r, r2);
+        return (quadrant & 2L) != 0 ? -v : v;
     }
 
-    /** Cosine of one phase, by the same method (for tests and non-critical paths). */
+    /** Cosine of one phase, by the same method. */
     public static double cos(double phase) {
-        double[] s = new double[1];
-        double[] c = new double[1];
-        sinCos(new double[] {phase}, s, c, 1);
-        return c[0];
+        double q = Math.rint(phase * TWO_OVER_PI);
+        double r = (phase - q * PIO2_HI) - q * PIO2_LO;
+        double r2 = r * r;
+        long quadrant = (long) q;
+        double v = (quadrant & 1L) != 0 ? sinPolynomial(r, r2) : cosPolynomial(r2);
+        return ((quadrant + 1L) & 2L) != 0 ? -v : v;
+    }
+
+    private static double sinPolynomial(double r, double r2) {
+        return r + r * r2 * (S3 + r2 * (S5 + r2 * (S7 + r2 * (S9 + r2 * (S11 + r2 * (S13 + r2 * S15))))));
+    }
+
+    private static double cosPolynomial(double r2) {
+        return 1.0 + r2 * (C2 + r2 * (C4 + r2 * (C6 + r2 * (C8 + r2 * (C10 + r2 * (C12 + r2 * (C14
+                + r2 * C16)))))));
     }
 }

@@ -159,25 +159,49 @@ public final class ShearModeField {
         refreshAmplitudes();
     }
 
-    /** Advances every time-correlated coefficient by one prepared step and refreshes the amplitudes. */
-    public void advanceAmplitudes(RandomGenerator rng) {
+    /**
+     * Advances every coefficient by one prepared step with standard normal variates taken from
+     * {@code normals[offset ..]}, four per mode (alpha1, beta1, alpha2, beta2; the last two unused with one
+     * polarization), and refreshes the amplitudes. A steady mode ignores its variates.
+     */
+    public void advanceAmplitudes(double[] normals, int offset) {
         if (!anyRandomInTime) {
             return;
         }
-        for (int m = 0; m < modes; m++) {
+        for (int m = 0, j = offset; m < modes; m++, j += 4) {
             double k = kick[m];
-            if (k == 0) {
-                continue;
-            }
             double rho = decay[m];
-            alpha1[m] = rho * alpha1[m] + k * rng.nextGaussian();
-            beta1[m] = rho * beta1[m] + k * rng.nextGaussian();
-            if (twoPolarizations[m]) {
-                alpha2[m] = rho * alpha2[m] + k * rng.nextGaussian();
-                beta2[m] = rho * beta2[m] + k * rng.nextGaussian();
-            }
+            alpha1[m] = rho * alpha1[m] + k * normals[j];
+            beta1[m] = rho * beta1[m] + k * normals[j + 1];
+            alpha2[m] = rho * alpha2[m] + k * normals[j + 2];
+            beta2[m] = rho * beta2[m] + k * normals[j + 3];
         }
         refreshAmplitudes();
+    }
+
+    /** Copies mode m (geometry, coefficients, prepared transition) into a lane record starting at slot j. */
+    void copyMode(int m, double[] data, int j, int stride) {
+        data[j + ModeLanes.KX * stride] = kx[m];
+        data[j + ModeLanes.KY * stride] = ky[m];
+        data[j + ModeLanes.KZ * stride] = kz[m];
+        data[j + ModeLanes.AX * stride] = ax[m];
+        data[j + ModeLanes.AY * stride] = ay[m];
+        data[j + ModeLanes.AZ * stride] = az[m];
+        data[j + ModeLanes.BX * stride] = bx[m];
+        data[j + ModeLanes.BY * stride] = by[m];
+        data[j + ModeLanes.BZ * stride] = bz[m];
+        data[j + ModeLanes.E1X * stride] = e1x[m];
+        data[j + ModeLanes.E1Y * stride] = e1y[m];
+        data[j + ModeLanes.E1Z * stride] = e1z[m];
+        data[j + ModeLanes.E2X * stride] = e2x[m];
+        data[j + ModeLanes.E2Y * stride] = e2y[m];
+        data[j + ModeLanes.E2Z * stride] = e2z[m];
+        data[j + ModeLanes.ALPHA1 * stride] = alpha1[m];
+        data[j + ModeLanes.ALPHA2 * stride] = alpha2[m];
+        data[j + ModeLanes.BETA1 * stride] = beta1[m];
+        data[j + ModeLanes.BETA2 * stride] = beta2[m];
+        data[j + ModeLanes.DECAY * stride] = decay[m];
+        data[j + ModeLanes.KICK * stride] = kick[m];
     }
 
     private void refreshAmplitudes() {
@@ -188,77 +212,6 @@ public final class ShearModeField {
             bx[m] = beta1[m] * e1x[m] + beta2[m] * e2x[m];
             by[m] = beta1[m] * e1y[m] + beta2[m] * e2y[m];
             bz[m] = beta1[m] * e1z[m] + beta2[m] * e2z[m];
-        }
-    }
-
-    /**
-     * Applies mode m's exact shear map for time h to points 0..n-1.
-     * The scratch arrays must hold at least n values; z is ignored in two dimensions.
-     */
-    public void shear(int m, double h, double[] x, double[] y, double[] z, int n,
-                      double[] phase, double[] sin, double[] cos) {
-        double k1 = kx[m];
-        double k2 = ky[m];
-        double k3 = kz[m];
-        if (dimensions == 3) {
-            for (int i = 0; i < n; i++) {
-                phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
-            }
-        } else {
-            for (int i = 0; i < n; i++) {
-                phase[i] = k1 * x[i] + k2 * y[i];
-            }
-        }
-        FastSinCos.sinCos(phase, sin, cos, n);
-        double hax = h * ax[m];
-        double hay = h * ay[m];
-        double hbx = h * bx[m];
-        double hby = h * by[m];
-        for (int i = 0; i < n; i++) {
-            x[i] += hax * cos[i] + hbx * sin[i];
-            y[i] += hay * cos[i] + hby * sin[i];
-        }
-        if (dimensions == 3) {
-            double haz = h * az[m];
-            double hbz = h * bz[m];
-            for (int i = 0; i < n; i++) {
-                z[i] += haz * cos[i] + hbz * sin[i];
-            }
-        }
-    }
-
-    /** Adds the velocity of all modes at points 0..n-1 to (vx, vy, vz). */
-    public void addVelocity(double[] x, double[] y, double[] z, int n, double[] vx, double[] vy, double[] vz,
-                            double[] phase, double[] sin, double[] cos) {
-        for (int m = 0; m < modes; m++) {
-            double k1 = kx[m];
-            double k2 = ky[m];
-            double k3 = kz[m];
-            if (dimensions == 3) {
-                for (int i = 0; i < n; i++) {
-                    phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
-                }
-            } else {
-                for (int i = 0; i < n; i++) {
-                    phase[i] = k1 * x[i] + k2 * y[i];
-                }
-            }
-            FastSinCos.sinCos(phase, sin, cos, n);
-            double a1 = ax[m];
-            double a2 = ay[m];
-            double b1 = bx[m];
-            double b2 = by[m];
-            for (int i = 0; i < n; i++) {
-                vx[i] += a1 * cos[i] + b1 * sin[i];
-                vy[i] += a2 * cos[i] + b2 * sin[i];
-            }
-            if (dimensions == 3) {
-                double a3 = az[m];
-                double b3 = bz[m];
-                for (int i = 0; i < n; i++) {
-                    vz[i] += a3 * cos[i] + b3 * sin[i];
-                }
-            }
         }
     }
 

@@ -10,6 +10,7 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.random.RandomGenerator;
 import java.util.stream.IntStream;
 import org.eddycast.field.FieldModel;
+import org.eddycast.field.ModeLanes;
 import org.eddycast.field.ShearModeField;
 import org.eddycast.stats.DisplacementMoments;
 
@@ -19,10 +20,20 @@ import org.eddycast.stats.DisplacementMoments;
  *
  * <p>Particles come in groups that share one realization; groups make up blocks of at least
  * {@value #MIN_BLOCK} particles, the independent units of the confidence interval. A block is advanced through
- * all its steps while its few kilobytes sit in cache and leaves only its curve of mean-square displacements at
- * the record times, so memory does not grow with the number of steps or particles. Blocks run in parallel in
- * batches of {@value #BATCH}; each has its own random stream ({@link BlockStreams}) and the batch's curves are
- * merged in block order, so the result is the same, bit for bit, for any thread count.
+ * all its steps while it sits in cache and leaves only its curve of mean-square displacements at the record
+ * times, so memory does not grow with the number of steps or particles. Shared realizations run one group at
+ * a time (the realization and the group's positions: a few kilobytes); with one realization per particle
+ * (group size 1) the whole block runs at once, particle i in lane i of a {@link ModeLanes} (21 doubles per
+ * mode and particle: about 690 kB for 64 modes and 64 particles, in the core's second-level cache).
+ *
+ * <p>Memory bound: per worker thread one block's workspace (above) and its curve (axes x records doubles);
+ * for the run, the moments (axes x records^2 doubles, about 0.45 MB for 3 axes and the schedule's ~136
+ * records) and one batch of {@value #BATCH} curves. Nothing depends on the number of steps or particles.
+ *
+ * <p>Blocks run in parallel in batches of {@value #BATCH}; each has its own random stream
+ * ({@link BlockStreams}) from which it draws its realizations, start points and the seeds of its bulk normal
+ * variates ({@link NormalStream}), and the batch's curves are merged in block order, so the result is the same,
+ * bit for bit, for any thread count.
  */
 public final class EnsembleRunner {
 
@@ -39,6 +50,7 @@ public final class EnsembleRunner {
     private final BlockStreams streams;
     private final RecordSchedule schedule;
     private final DisplacementMoments moments;
+    private final KernelChoice kernels;
     private long blocksDone;
 
     /**
@@ -52,6 +64,12 @@ public final class EnsembleRunner {
      */
     public EnsembleRunner(FieldModel model, Integrator integrator, double dt, int steps, int groupSize,
                           double[] d0, long seed) {
+        this(model, integrator, dt, steps, groupSize, d0, seed, KernelChoice.fastest());
+    }
+
+    /** As above, on the given implementation of the inner loops. */
+    public EnsembleRunner(FieldModel model, Integrator integrator, double dt, int steps, int groupSize,
+                          double[] d0, long seed, KernelChoice kernels) {
         if (!(dt > 0) || !Double.isFinite(dt)) {
             throw new IllegalArgumentException("time step must be positive; got " + dt);
         }
@@ -68,6 +86,7 @@ public final class EnsembleRunner {
         this.streams = new BlockStreams(seed);
         this.schedule = RecordSchedule.forSteps(steps);
         this.moments = new DisplacementMoments(model.dimensions(), schedule.times(dt), blockSize);
+        this.kernels = kernels;
     }
 
     /** Particles per block (a whole number of groups). */
@@ -148,31 +167,37 @@ public final class EnsembleRunner {
     /** Advances block b through all its groups and steps; returns its mean-square displacement curves. */
     double[] runBlock(long b, Cancellation cancel, AtomicLong groupSteps) {
         RandomGenerator rng = streams.forBlock(b);
+        double[] curve = groupSize == 1 ? runOwnRealizations(rng, cancel, groupSteps)
+                : runSharedRealizations(rng, cancel, groupSteps);
+        double inverse = 1.0 / blockSize;
+        for (int j = 0; j < curve.length; j++) {
+            curve[j] *= inverse;
+        }
+        return curve;
+    }
+
+    /** Groups of particles, one group at a time through all steps, each group in one realization. */
+    private double[] runSharedRealizations(RandomGenerator rng, Cancellation cancel, AtomicLong groupSteps) {
         int axes = model.dimensions();
         int records = schedule.size();
         double[] curve = new double[axes * records];
         ShearModeField field = new ShearModeField(axes, model.modeCount());
         ParticleBlock particles = new ParticleBlock(groupSize);
-        ParticleStepper stepper = new ParticleStepper(integrator, dt, d0);
-        double region = model.startRegion();
-        double[] start = new double[3];
+        ParticleStepper stepper = new ParticleStepper(integrator, dt, d0, kernels.newShearKernel());
+        NormalStream normals = kernels.newNormalStream();
         for (int g = 0; g < blockSize / groupSize; g++) {
             model.realize(field, rng);
             field.prepareStep(dt);
-            for (int i = 0; i < groupSize; i++) {
-                start[0] = region * rng.nextDouble();
-                start[1] = region * rng.nextDouble();
-                start[2] = axes == 3 ? region * rng.nextDouble() : 0.0;
-                particles.place(i, start);
-            }
+            place(particles, groupSize, rng);
+            normals.reseed(rng);
             int record = 0;
             for (int s = 1; s <= steps; s++) {
                 if (cancel.isCancelled()) {
                     throw new RunCancelledException();
                 }
-                stepper.step(field, particles, groupSize, rng);
+                stepper.step(field, particles, groupSize, normals);
                 if (s == schedule.step(record)) {
-                    accumulate(particles, curve, record, records, axes, s);
+                    accumulate(particles, groupSize, curve, record, records, axes, s);
                     record++;
                 }
                 if ((s & 63) == 0) {
@@ -181,18 +206,62 @@ public final class EnsembleRunner {
             }
             groupSteps.addAndGet(steps & 63);
         }
-        double inverse = 1.0 / blockSize;
-        for (int j = 0; j < curve.length; j++) {
-            curve[j] *= inverse;
-        }
         return curve;
     }
 
-    private void accumulate(ParticleBlock p, double[] curve, int record, int records, int axes, int step) {
+    /** The whole block at once, particle i in lane i with a realization of its own. */
+    private double[] runOwnRealizations(RandomGenerator rng, Cancellation cancel, AtomicLong groupSteps) {
+        int axes = model.dimensions();
+        int records = schedule.size();
+        double[] curve = new double[axes * records];
+        ShearModeField field = new ShearModeField(axes, model.modeCount());
+        ModeLanes lanes = new ModeLanes(axes, model.modeCount(), blockSize);
+        for (int lane = 0; lane < blockSize; lane++) {
+            model.realize(field, rng);
+            field.prepareStep(dt);
+            lanes.load(lane, field);
+        }
+        ParticleBlock particles = new ParticleBlock(blockSize);
+        place(particles, blockSize, rng);
+        ParticleStepper stepper = new ParticleStepper(integrator, dt, d0, kernels.newShearKernel());
+        NormalStream normals = kernels.newNormalStream();
+        normals.reseed(rng);
+        int record = 0;
+        for (int s = 1; s <= steps; s++) {
+            if (cancel.isCancelled()) {
+                throw new RunCancelledException();
+            }
+            stepper.step(lanes, particles, normals);
+            if (s == schedule.step(record)) {
+                accumulate(particles, blockSize, curve, record, records, axes, s);
+                record++;
+            }
+            if ((s & 63) == 0) {
+                groupSteps.addAndGet(64L * blockSize);
+            }
+        }
+        groupSteps.addAndGet((long) (steps & 63) * blockSize);
+        return curve;
+    }
+
+    /** Places the first n particles uniformly in the model's start region. */
+    private void place(ParticleBlock particles, int n, RandomGenerator rng) {
+        double region = model.startRegion();
+        double[] start = new double[3];
+        boolean three = model.dimensions() == 3;
+        for (int i = 0; i < n; i++) {
+            start[0] = region * rng.nextDouble();
+            start[1] = region * rng.nextDouble();
+            start[2] = three ? region * rng.nextDouble() : 0.0;
+            particles.place(i, start);
+        }
+    }
+
+    private void accumulate(ParticleBlock p, int n, double[] curve, int record, int records, int axes, int step) {
         double sx = 0;
         double sy = 0;
         double sz = 0;
-        for (int i = 0; i < groupSize; i++) {
+        for (int i = 0; i < n; i++) {
             double dx = p.x[i] - p.x0[i];
             double dy = p.y[i] - p.y0[i];
             double dz = p.z[i] - p.z0[i];

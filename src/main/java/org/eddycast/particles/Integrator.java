@@ -1,6 +1,9 @@
 package org.eddycast.particles;
 
+import java.util.Arrays;
 import java.util.Locale;
+import org.eddycast.field.ModeLanes;
+import org.eddycast.field.ShearKernel;
 import org.eddycast.field.ShearModeField;
 
 /**
@@ -19,43 +22,77 @@ public enum Integrator {
 
     EULER_MARUYAMA("euler") {
         @Override
-        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
-            java.util.Arrays.fill(p.vx, 0, n, 0.0);
-            java.util.Arrays.fill(p.vy, 0, n, 0.0);
-            java.util.Arrays.fill(p.vz, 0, n, 0.0);
-            field.addVelocity(p.x, p.y, p.z, n, p.vx, p.vy, p.vz, p.phase, p.sin, p.cos);
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
+            Arrays.fill(p.vx, 0, n, 0.0);
+            Arrays.fill(p.vy, 0, n, 0.0);
+            Arrays.fill(p.vz, 0, n, 0.0);
+            for (int m = 0; m < field.modes(); m++) {
+                kernel.addVelocity(field, m, p.x, p.y, p.z, n, p.vx, p.vy, p.vz);
+            }
+            move(p, n, dt);
+        }
+
+        @Override
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
+            int n = lanes.width();
+            Arrays.fill(p.vx, 0, n, 0.0);
+            Arrays.fill(p.vy, 0, n, 0.0);
+            Arrays.fill(p.vz, 0, n, 0.0);
+            for (int m = 0; m < lanes.modes(); m++) {
+                kernel.addVelocity(lanes, m, p.x, p.y, p.z, p.vx, p.vy, p.vz);
+            }
+            move(p, n, dt);
+        }
+
+        private void move(ParticleBlock p, int n, double dt) {
             for (int i = 0; i < n; i++) {
                 p.x[i] += dt * p.vx[i];
                 p.y[i] += dt * p.vy[i];
-            }
-            if (field.dimensions() == 3) {
-                for (int i = 0; i < n; i++) {
-                    p.z[i] += dt * p.vz[i];
-                }
+                p.z[i] += dt * p.vz[i];
             }
         }
     },
 
     LIE("lie") {
         @Override
-        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
             for (int m = 0; m < field.modes(); m++) {
-                field.shear(m, dt, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+                kernel.shear(field, m, dt, p.x, p.y, p.z, n);
+            }
+        }
+
+        @Override
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
+            for (int m = 0; m < lanes.modes(); m++) {
+                kernel.shear(lanes, m, dt, p.x, p.y, p.z);
             }
         }
     },
 
     STRANG("strang") {
         @Override
-        void drift(ShearModeField field, ParticleBlock p, int n, double dt) {
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
             int last = field.modes() - 1;
             double half = 0.5 * dt;
             for (int m = 0; m < last; m++) {
-                field.shear(m, half, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+                kernel.shear(field, m, half, p.x, p.y, p.z, n);
             }
-            field.shear(last, dt, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+            kernel.shear(field, last, dt, p.x, p.y, p.z, n);
             for (int m = last - 1; m >= 0; m--) {
-                field.shear(m, half, p.x, p.y, p.z, n, p.phase, p.sin, p.cos);
+                kernel.shear(field, m, half, p.x, p.y, p.z, n);
+            }
+        }
+
+        @Override
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
+            int last = lanes.modes() - 1;
+            double half = 0.5 * dt;
+            for (int m = 0; m < last; m++) {
+                kernel.shear(lanes, m, half, p.x, p.y, p.z);
+            }
+            kernel.shear(lanes, last, dt, p.x, p.y, p.z);
+            for (int m = last - 1; m >= 0; m--) {
+                kernel.shear(lanes, m, half, p.x, p.y, p.z);
             }
         }
     };
@@ -86,6 +123,9 @@ public enum Integrator {
         return null;
     }
 
-    /** Advances the first n particles of the block by the drift over dt. */
-    abstract void drift(ShearModeField field, ParticleBlock p, int n, double dt);
+    /** Advances the first n particles of the block, sharing one realization, by the drift over dt. */
+    abstract void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt);
+
+    /** Advances particle i of the block in lane i's own realization, every lane, by the drift over dt. */
+    abstract void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt);
 }

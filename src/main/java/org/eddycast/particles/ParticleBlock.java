@@ -1,8 +1,8 @@
 package org.eddycast.particles;
 
 /**
- * Positions of a block of particles as structure-of-arrays doubles, their starting points, and the scratch
- * arrays the kernels use. Owned by one thread; nothing is allocated after construction.
+ * Positions of a block of particles as structure-of-arrays doubles, their starting points, and a velocity
+ * scratch for the Euler scheme. Owned by one thread; nothing is allocated after construction.
  */
 public final class ParticleBlock {
 
@@ -16,9 +16,6 @@ public final class ParticleBlock {
     final double[] vx;
     final double[] vy;
     final double[] vz;
-    final double[] phase;
-    final double[] sin;
-    final double[] cos;
 
     public ParticleBlock(int size) {
         if (size < 1) {
@@ -34,9 +31,6 @@ public final class ParticleBlock {
         vx = new double[size];
         vy = new double[size];
         vz = new double[size];
-        phase = new double[size];
-        sin = new double[size];
-        cos = new double[size];
     }
 
     public int size() {
