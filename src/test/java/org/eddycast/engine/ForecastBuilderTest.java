@@ -13,6 +13,7 @@ import org.eddycast.particles.RunListener;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.stats.AxisEstimate;
+import org.eddycast.docs.ValidationLog;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -44,6 +45,10 @@ class ForecastBuilderTest {
             double lowSigma = f.widthLow()[a.axis()][last] / factor;
             double highSigma = f.widthHigh()[a.axis()][last] / factor;
             assertTrue(lowSigma <= sigma && sigma <= highSigma);
+            ValidationLog.exact("canal preset, late plume variance / 2t against D, axis " + a.axisName()
+                    + " (m^2/s)", "Taylor 1921, Diffusion by continuous movements, Proc. London Math. Soc. "
+                    + "s2-20:196: sigma^2 -> 2 D t", a.diffusivity().value(), apparent,
+                    0.15 * a.diffusivity().value(), "within 15% at ten times the simulated time");
             assertEquals(a.diffusivity().value(), apparent, 0.15 * a.diffusivity().value(),
                     "axis " + a.axisName() + ": late variance / 2t");
             double lowD = lowSigma * lowSigma / (2 * t[last]);
@@ -54,6 +59,9 @@ class ForecastBuilderTest {
         double u = 0.04;
         double sigmaEarly = f.width()[0][0] / factor;
         // First grid point: one time step, where sigma^2 = u'^2 t^2 (1 + O(t / T_L)) plus 2 D0 t (negligible).
+        ValidationLog.exact("canal preset, plume sigma after one step against u' t (m)", "Taylor 1921, Diffusion "
+                + "by continuous movements, Proc. London Math. Soc. s2-20:196: sigma^2 = u'^2 t^2 for t << T_L",
+                u * t[0], sigmaEarly, 0.15 * u * t[0], "within 15%");
         assertEquals(u * t[0], sigmaEarly, 0.15 * u * t[0], "ballistic start");
     }
 

@@ -3,6 +3,7 @@ package org.eddycast.engine;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.stream.Stream;
+import org.eddycast.docs.ValidationLog;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -26,6 +27,12 @@ class VerificationSuiteTest {
     @MethodSource("cases")
     void reproducesTheKnownDiffusivity(VerificationCase c) {
         VerificationSuite.Outcome o = VerificationSuite.run(c, 2, RunListener.NONE, new Cancellation());
+        double allowed = 3 * o.estimate().standardError() + c.biasBound();
+        ValidationLog.statistical(c.name() + " (dimensionless)", c.source(), c.expected(), o.estimate().value(),
+                o.estimate().low(), o.estimate().high(), c.expected() - allowed, c.expected() + allowed,
+                "3 standard errors over independent blocks plus the bias bound (" + c.biasReason()
+                        + "); 95% interval at most " + Math.round(100 * VerificationCase.MAX_RELATIVE_WIDTH)
+                        + "% of the value", o.passed());
         assertTrue(o.passed(), c.name() + ": expected " + c.expected() + ", estimate " + o.estimate() + " ("
                 + o.reason() + ")");
     }

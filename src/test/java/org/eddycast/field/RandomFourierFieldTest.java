@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.SplittableRandom;
 import java.util.random.RandomGenerator;
 import java.util.random.RandomGeneratorFactory;
+import org.eddycast.docs.ValidationLog;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -183,6 +184,10 @@ class RandomFourierFieldTest {
             double meanVariance = variance / realizations;
             double se = Math.sqrt((sumSq / realizations - meanIntegral * meanIntegral) / realizations);
             double l11 = meanIntegral / meanVariance;
+            ValidationLog.exact(dims + "D random Fourier field, longitudinal integral length L11 / L",
+                    "Pope 2000, Turbulent Flows, eq. 6.213: L11 = (pi / (2 u'^2)) integral of E(k)/k dk", 1.0, l11,
+                    4 * se / meanVariance + 0.03, "4 standard errors over 20,000 realizations plus 0.03 for the "
+                            + "finite integration range");
             assertEquals(1.0, l11, 4 * se / meanVariance + 0.03, dims + "D integral length");
         }
     }
@@ -195,6 +200,13 @@ class RandomFourierFieldTest {
     @Test
     void popeModelConstantsAtHighReynoldsNumber() {
         PopeModelSpectrum p = new PopeModelSpectrum(1e5);
+        String pope = "Pope 2000, Turbulent Flows, sec. 6.5.3 (from memory)";
+        ValidationLog.exact("model spectrum constant c_L at high Reynolds number", pope, 6.78, p.cL(), 0.15,
+                "within 0.15 (value from memory)");
+        ValidationLog.exact("model spectrum constant c_eta at high Reynolds number", pope, 0.40, p.cEta(), 0.01,
+                "within 0.01 (value from memory)");
+        ValidationLog.exact("model spectrum L11 / l at high Reynolds number", pope, 0.43, 1e5 / p.energyLength(),
+                0.01, "within 0.01 (value from memory)");
         assertEquals(6.78, p.cL(), 0.15);
         assertEquals(0.40, p.cEta(), 0.01);
         assertEquals(0.43, 1e5 / p.energyLength(), 0.01);

@@ -10,6 +10,7 @@ import org.eddycast.field.PowerLawBand;
 import org.eddycast.field.RandomFourierModel;
 import org.eddycast.field.ShearModeField;
 import org.eddycast.field.SpectrumTable;
+import org.eddycast.docs.ValidationLog;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -74,6 +75,9 @@ class IntegratorTest {
             double det = jacobianDeterminant(integrator, field, dt, p);
             // The fourth-order difference errs by about h^4 |f^(5)| / 30 ~ 1e-12 times k^5 (k up to ~20):
             // 1e-8 is far below Euler's departure, which is of order dt |div u|... i.e. dt^2 |grad u|^2.
+            ValidationLog.exact(integrator + " step, Jacobian determinant", "exact: each substep is a shear map "
+                    + "(derived; volume-preserving splitting, " + "McLachlan & Quispel 2002, Splitting methods, Acta Numerica 11" + ")", 1.0, det, 1e-8,
+                    "fourth-order finite differences, within 1e-8");
             assertEquals(1.0, det, 1e-8, integrator + " Jacobian determinant");
         }
         double eulerDet = jacobianDeterminant(Integrator.EULER_MARUYAMA, field, dt, p);
@@ -132,6 +136,13 @@ class IntegratorTest {
         double lie = observedOrder(errors(Integrator.LIE, cellular, start, 2.0, steps));
         double strang = observedOrder(errors(Integrator.STRANG, cellular, start, 2.0, steps));
         double euler = observedOrder(errors(Integrator.EULER_MARUYAMA, cellular, start, 2.0, steps));
+        ValidationLog.exact("Lie splitting, observed order on the cellular flow", "McLachlan & Quispel 2002, Splitting methods, Acta Numerica 11", 1.0, lie, 0.15,
+                "slope of log error against log step over four halvings, within 0.15");
+        ValidationLog.exact("Strang splitting, observed order on the cellular flow", "McLachlan & Quispel 2002, Splitting methods, Acta Numerica 11", 2.0, strang,
+                0.15, "slope of log error against log step over four halvings, within 0.15");
+        ValidationLog.exact("Euler-Maruyama, observed order on the cellular flow (deterministic drift)",
+                "Euler's method is first order (common practice)", 1.0, euler, 0.15,
+                "slope of log error against log step over four halvings, within 0.15");
         assertEquals(1.0, lie, 0.15, "Lie order on the cellular flow");
         assertEquals(2.0, strang, 0.15, "Strang order on the cellular flow");
         assertEquals(1.0, euler, 0.15, "Euler order on the cellular flow");
@@ -139,6 +150,12 @@ class IntegratorTest {
         ShearModeField random = frozenRandomField(0.01);
         double[] startRandom = {0.2, 0.5, -0.7};
         double[] fine = {0.02, 0.01, 0.005, 0.0025};
+        ValidationLog.exact("Lie splitting, observed order on a frozen random Fourier field", "McLachlan & Quispel 2002, Splitting methods, Acta Numerica 11", 1.0,
+                observedOrder(errors(Integrator.LIE, random, startRandom, 1.0, fine)), 0.15,
+                "slope of log error against log step over four halvings, within 0.15");
+        ValidationLog.exact("Strang splitting, observed order on a frozen random Fourier field", "McLachlan & Quispel 2002, Splitting methods, Acta Numerica 11",
+                2.0, observedOrder(errors(Integrator.STRANG, random, startRandom, 1.0, fine)), 0.15,
+                "slope of log error against log step over four halvings, within 0.15");
         assertEquals(1.0, observedOrder(errors(Integrator.LIE, random, startRandom, 1.0, fine)), 0.15);
         assertEquals(2.0, observedOrder(errors(Integrator.STRANG, random, startRandom, 1.0, fine)), 0.15);
     }

@@ -1,0 +1,64 @@
+package org.eddycast.docs;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.eddycast.engine.Engine;
+import org.eddycast.engine.StudyResult;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.particles.RunListener;
+import org.eddycast.scenario.ScenarioReader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Every preset's result sits in the range its own description claims ("Expected: the ... comes out between
+ * ... and ..."). The presets run with 1,024 particles instead of their own count, with their own fixed seeds,
+ * to keep the suite short (the same reduced runs as the engine's preset test, so the simulation cache shares
+ * them). Why the claimed ranges are wide enough for that: at 1,024 particles the printed 95% intervals of these
+ * presets are at most about +-26% of the value (a standard error near 13%, smaller for a mean over three axes
+ * and for mixing figures, whose intervals come from the same diffusivities), and every claimed range reaches at
+ * least 28% on each side of the reduced estimate (and, for the two verification flows, of the exact value), so
+ * more than two standard errors of the reduced run; a full-size run, with a far smaller error, lands inside
+ * whenever it agrees with the reduced one. Each claim is a statement
+ * about the tool's answer for an invented scenario (a regression check); the checks against outside values are
+ * in the validation record.
+ */
+class PresetClaimsTest {
+
+    private static final int PARTICLES = 1024;
+
+    static Stream<Path> presets() throws Exception {
+        return Files.list(Path.of("presets")).filter(p -> p.toString().endsWith(".json")).sorted();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("presets")
+    void resultSitsInTheClaimedRange(Path preset) throws Exception {
+        String text = Files.readString(preset);
+        PresetClaim claim = PresetClaim.parse(new ObjectMapper().readTree(text).path("description").asText());
+        String reduced = text.replaceAll("\"particles\": \\d+", "\"particles\": " + PARTICLES);
+        StudyResult r = Engine.run(ScenarioReader.parse(reduced, preset.toAbsolutePath().getParent()), 2,
+                RunListener.NONE, new Cancellation());
+        double value = claim.valueOf(r);
+        assertTrue(claim.low() <= value && value <= claim.high(), preset.getFileName() + ": " + claim.quantity()
+                + " = " + value + " " + claim.unit() + ", claimed between " + claim.low() + " and " + claim.high());
+    }
+
+    @Test
+    void claimsAreReadFromTheDescription() {
+        PresetClaim c = PresetClaim.parse("Question? Expected: the blend time comes out between 170 and 370 s.");
+        assertEquals("blend time", c.quantity());
+        assertEquals(170, c.low());
+        assertEquals(370, c.high());
+        assertThrows(IllegalArgumentException.class, () -> PresetClaim.parse("No claim here."));
+        assertThrows(IllegalArgumentException.class,
+                () -> PresetClaim.parse("Expected: the blend time comes out between 3 and 1 s."));
+    }
+}
