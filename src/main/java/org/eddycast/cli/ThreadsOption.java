@@ -7,7 +7,7 @@ import picocli.CommandLine.Option;
 final class ThreadsOption {
 
     @Option(names = "--threads", paramLabel = "N",
-            description = "Worker threads (default: all cores, here ${sys:eddycast.cores}). Results do not depend on it.")
+            description = "Worker threads (default: all cores). The results do not depend on it.")
     Integer threads;
 
     int resolve() {

@@ -24,13 +24,13 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Every command in the manual's code blocks runs as written: each {@code java -jar target/eddycast.jar ...}
+ * Every command in the manual's code blocks runs as written: each {@code java --add-modules jdk.incubator.vector -jar target/eddycast.jar ...}
  * runs in-process through {@link Main#execute} from the project directory and must exit 0 with output, and
  * every line with an {@code mvn} command must be one of the README's own command lines.
  */
 class ManualCommandsTest {
 
-    private static final String JAR = "java -jar target/eddycast.jar";
+    private static final String JAR = "java --add-modules jdk.incubator.vector -jar target/eddycast.jar";
 
     /** Every line of every code block in the given Markdown files. */
     static List<String> codeLines(Stream<Path> files) {
@@ -83,7 +83,7 @@ class ManualCommandsTest {
         StringWriter err = new StringWriter();
         String[] args = arguments.isEmpty() ? new String[0] : arguments.split("\\s+");
         int status = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
-        assertEquals(0, status, "java -jar target/eddycast.jar " + arguments + " failed: " + err);
+        assertEquals(0, status, "java --add-modules jdk.incubator.vector -jar target/eddycast.jar " + arguments + " failed: " + err);
         assertFalse(out.toString().isBlank(), "no output from " + arguments);
     }
 

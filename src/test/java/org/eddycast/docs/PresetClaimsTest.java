@@ -1,6 +1,7 @@
 package org.eddycast.docs;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -31,6 +32,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * in the validation record.
  */
 class PresetClaimsTest {
+    // Every preset runs end to end here too (the engine, the forecast and its cautions), so no separate run test.
 
     private static final int PARTICLES = 1024;
 
@@ -46,6 +48,12 @@ class PresetClaimsTest {
         String reduced = text.replaceAll("\"particles\": \\d+", "\"particles\": " + PARTICLES);
         StudyResult r = Engine.run(ScenarioReader.parse(reduced, preset.toAbsolutePath().getParent()), 2,
                 RunListener.NONE, new Cancellation());
+        for (var a : r.diffusivity().axes()) {
+            assertTrue(a.diffusivity().value() > 0 && Double.isFinite(a.diffusivity().value()),
+                    preset.getFileName() + " axis " + a.axisName());
+        }
+        assertFalse(r.forecast().cautions().isEmpty(), "every forecast carries the cautions");
+        assertTrue(r.forecast().width()[0][r.forecast().times().length - 1] > 0, "a forecast width");
         double value = claim.valueOf(r);
         assertTrue(claim.low() <= value && value <= claim.high(), preset.getFileName() + ": " + claim.quantity()
                 + " = " + value + " " + claim.unit() + ", claimed between " + claim.low() + " and " + claim.high());
