@@ -47,7 +47,6 @@ public final class TextSummary {
         if (f != null) {
             sb.append(String.format(Locale.ROOT, "  forecast (%s; %s):%n", f.inDistance() ? "distance downstream"
                     : "time", f.measure().label()));
-            String unit = f.inDistance() ? "m" : "s";
             sb.append(String.format(Locale.ROOT, "    %12s %12s %12s %12s %14s%n", f.inDistance() ? "distance m"
                     : "time s", "width x m", "width y m", "width z m", "peak kg/m^3"));
             double[] grid = f.grid();
@@ -66,8 +65,11 @@ public final class TextSummary {
                         c.estimate().name(), c.estimate().value(), c.estimate().unit(), c.estimate().sourceText(),
                         c.forecast(), c.ratio(), c.agree() ? "agree within the stated uncertainty" : "disagree"));
             }
-            sb.append("  widths use ").append(unit.equals("m") ? "x = U t; " : "").append("see the JSON for the full "
-                    + "grid, bands and assumptions\n");
+            sb.append("  assumptions:\n");
+            for (String a : f.assumptions()) {
+                sb.append("    - ").append(a).append('\n');
+            }
+            sb.append("  (the full forecast grid with its 95% bands is in the JSON output, --json)\n");
         }
         for (String n : r.notes()) {
             sb.append("  note: ").append(n).append('\n');
