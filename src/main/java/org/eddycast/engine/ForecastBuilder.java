@@ -7,6 +7,7 @@ import org.eddycast.forecast.AxisDensity;
 import org.eddycast.forecast.Cautions;
 import org.eddycast.forecast.ChannelHandbook;
 import org.eddycast.forecast.ChannelMixingDistance;
+import org.eddycast.forecast.ChannelPlume;
 import org.eddycast.forecast.ChannelRules;
 import org.eddycast.forecast.Comparison;
 import org.eddycast.forecast.Forecast;
@@ -76,6 +77,7 @@ public final class ForecastBuilder {
         double meanVelocity = flow.turbulence() == null ? 0 : flow.turbulence().meanVelocity();
         AxisDensityFactory density;
         Release release = s.release();
+        ChannelPlume plume = null;
         if (s.flow() instanceof TankFlow t) {
             TankDesign tank = t.design();
             double side = tank.tankDiameter() * Math.sqrt(Math.PI) / 2;
@@ -138,6 +140,12 @@ public final class ForecastBuilder {
                 horizon = 1.2 * Math.max(across, overDepth) / u;
             }
             meanVelocity = u;
+            if (!Double.isNaN(release.rate())) {
+                plume = new ChannelPlume(release.rate(), u, ch.depth(), ch.width(), d[1], d[2], fromBank,
+                        ch.depth());
+                assumptions.add("continuous release at the surface: a steady Gaussian plume with the late eddy "
+                        + "diffusivities, bed, surface and banks reflecting (method of images)");
+            }
         } else {
             density = (axis, dEff) -> new FreeAxis(0, dEff);
             assumptions.add("unbounded water: no walls, bed or surface within reach of the cloud");
@@ -178,8 +186,12 @@ public final class ForecastBuilder {
                 grid[j] = meanVelocity * times[j];
             }
         }
+        double[] plumePeak = new double[plume == null ? 0 : grid.length];
+        for (int j = 0; j < plumePeak.length; j++) {
+            plumePeak[j] = plume.peakConcentration(grid[j]);
+        }
         return new Forecast(inDistance, grid, times, measure, settings.edgeFraction(), width, widthLow, widthHigh,
-                r.duration(), peak, mixing, handbook, assumptions, Cautions.ALL);
+                r.duration(), peak, mixing, handbook, assumptions, Cautions.ALL, plumePeak);
     }
 
     /** An axis density for a diffusivity that reproduces the variance at the time asked. */

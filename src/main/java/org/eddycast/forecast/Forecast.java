@@ -21,11 +21,14 @@ import java.util.List;
  * @param handbook       simulation against handbook, one comparison each
  * @param assumptions    what the forecast assumed, generated from what was used
  * @param cautions       the cautions
+ * @param plumeConcentration for a continuous release in a channel, the largest concentration in the
+ *                       cross-section at each grid distance (kg/m^3; Gaussian plume with walls by images);
+ *                       empty when there is no continuous release
  */
 public record Forecast(boolean inDistance, double[] grid, double[] times, WidthMeasure measure, double edgeFraction,
                        double[][] width, double[][] widthLow, double[][] widthHigh, double simulatedUntil,
                        double[] peakConcentration, List<MixingFigure> mixing, List<Comparison> handbook,
-                       List<String> assumptions, List<String> cautions) {
+                       List<String> assumptions, List<String> cautions, double[] plumeConcentration) {
 
     /**
      * A time or distance to mixed.
@@ -51,6 +54,12 @@ public record Forecast(boolean inDistance, double[] grid, double[] times, WidthM
         handbook = List.copyOf(handbook);
         assumptions = List.copyOf(assumptions);
         cautions = List.copyOf(cautions);
+        plumeConcentration = plumeConcentration.clone();
+    }
+
+    @Override
+    public double[] plumeConcentration() {
+        return plumeConcentration.clone();
     }
 
     private static double[][] deep(double[][] a) {

@@ -110,6 +110,13 @@ public final class ResultJson {
         peak.put("unit", "kg/m^3");
         peak.put("release", "instantaneous");
         array(peak, "value", f.peakConcentration());
+        if (f.plumeConcentration().length > 0) {
+            ObjectNode plume = node.putObject("continuousPlume");
+            plume.put("unit", "kg/m^3");
+            plume.put("what", "largest concentration in the cross-section of the steady plume of a continuous "
+                    + "release, at each grid distance");
+            array(plume, "value", f.plumeConcentration());
+        }
         ArrayNode mixing = node.putArray("mixing");
         for (Forecast.MixingFigure m : f.mixing()) {
             ObjectNode o = mixing.addObject();

@@ -104,4 +104,26 @@ class ForecastBuilderTest {
         String verdict = org.eddycast.report.OptionComparison.of(List.of("a", "b"), List.of(a, b)).verdict();
         assertTrue(verdict.contains("spreads the tracer faster"), verdict);
     }
+
+    /**
+     * A continuous release in a channel: far downstream the plume is mixed over the whole section, so its
+     * concentration tends to the fully mixed value q / (U W h) (mass balance; Fischer et al. 1979, Mixing in
+     * Inland and Coastal Waters, ch. 5).
+     */
+    @Test
+    void continuousReleaseTendsToTheFullyMixedConcentration() throws Exception {
+        String text = Files.readString(Path.of("presets", "lowland-channel-dye.json"))
+                .replaceAll("\"particles\": \\d+", "\"particles\": 1024")
+                .replace("\"mass\": 0.2,", "\"mass\": 0.2, \"rate\": 0.01,");
+        StudyResult r = Engine.run(ScenarioReader.parse(text), 2, RunListener.NONE, new Cancellation());
+        double[] plume = r.forecast().plumeConcentration();
+        assertEquals(r.forecast().grid().length, plume.length);
+        double mixed = 0.01 / (0.45 * 6.0 * 1.2);
+        double last = plume[plume.length - 1];
+        // The grid ends at 1.2 times the distance to mixed across the width (5% criterion).
+        assertEquals(mixed, last, 0.05 * mixed, "fully mixed far downstream");
+        assertTrue(plume[0] > 10 * mixed, "concentrated near the source");
+        StudyResult none = run("lowland-channel-dye.json", 1024);
+        assertEquals(0, none.forecast().plumeConcentration().length, "no continuous release, no plume");
+    }
 }
