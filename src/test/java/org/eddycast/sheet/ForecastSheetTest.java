@@ -27,10 +27,10 @@ import org.junit.jupiter.api.Test;
  * with PDFBox, the handbook curves of the width chart checked against the handbook formula, and the comparison
  * sheet of two design options.
  */
-class ForecastSheetTest {
+public class ForecastSheetTest {
 
     /** An invented channel, 6 m wide and 1.2 m deep; few particles so the run takes seconds. */
-    static final String CHANNEL = """
+    public static final String CHANNEL = """
             { "version": 1, "name": "Small drainage channel (test)",
               "flow": { "kind": "channel", "depth": 1.2, "width": 6.0, "meanVelocity": 0.45, "bedSlope": 2.0e-4 },
               "substance": { "name": "rhodamine WT", "molecularDiffusivity": 4.0e-10 },

@@ -1,0 +1,64 @@
+package org.eddycast.ui;
+
+import java.util.ArrayList;
+import java.util.List;
+import javax.swing.JTable;
+import javax.swing.table.DefaultTableModel;
+import org.eddycast.report.SummaryContent;
+
+/** A read-only table of text showing a {@link SummaryContent.Table}; the headings carry the units. */
+final class TextTable {
+
+    private final DefaultTableModel model = new DefaultTableModel() {
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return false;
+        }
+    };
+    private final JTable table = new JTable(model) {
+        @Override
+        public String getToolTipText(java.awt.event.MouseEvent e) {
+            int r = rowAtPoint(e.getPoint());
+            int c = columnAtPoint(e.getPoint());
+            return r < 0 || c < 0 ? null : String.valueOf(getValueAt(r, c));
+        }
+    };
+
+    TextTable(String name) {
+        table.setName(name);
+        table.setFillsViewportHeight(true);
+        table.setAutoCreateRowSorter(false);
+    }
+
+    JTable table() {
+        return table;
+    }
+
+    /** Replaces the content. */
+    void show(SummaryContent.Table t) {
+        model.setRowCount(0);
+        model.setColumnIdentifiers(t.header().stream().map(TextTable::headerHtml).toArray());
+        for (List<String> row : t.rows()) {
+            model.addRow(row.toArray());
+        }
+    }
+
+    /** A heading on two or three lines, so a long heading with its unit is not cut off. */
+    static String headerHtml(String h) {
+        String escaped = h.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+        return "<html><center>" + escaped.replace(", ", ",<br>").replace(" [", "<br>[") + "</center></html>";
+    }
+
+    /** The cells as text. */
+    List<List<String>> rows() {
+        List<List<String>> rows = new ArrayList<>();
+        for (int r = 0; r < model.getRowCount(); r++) {
+            List<String> row = new ArrayList<>();
+            for (int c = 0; c < model.getColumnCount(); c++) {
+                row.add(String.valueOf(model.getValueAt(r, c)));
+            }
+            rows.add(row);
+        }
+        return rows;
+    }
+}
