@@ -61,7 +61,9 @@ final class OptionsView extends JPanel {
         verdict.setWrapStyleWord(true);
         verdict.setName("verdict");
         add(chartHolder);
-        add(new JScrollPane(table));
+        JScrollPane scroll = new JScrollPane(table);
+        scroll.setColumnHeaderView(table.getTableHeader());
+        add(scroll);
         add(verdict, "hmin 48");
         refresh();
     }

@@ -69,11 +69,11 @@ final class ResultsView extends JPanel {
         reasoning.setName("reasoning");
         JPanel forecast = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
                 "[grow 70,fill][grow 30,fill]"));
-        forecast.add(new JScrollPane(forecastTable.table()));
+        forecast.add(forecastTable.scroll());
         forecast.add(new JScrollPane(mixing));
         JPanel handbook = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
                 "[grow 40,fill][grow 60,fill]"));
-        handbook.add(new JScrollPane(handbookTable.table()));
+        handbook.add(handbookTable.scroll());
         handbook.add(new JScrollPane(handbookNotes));
         tabs.addTab("Width", width);
         tabs.addTab("Peak", peak);
@@ -82,7 +82,9 @@ final class ResultsView extends JPanel {
         tabs.addTab("Spread", spread);
         tabs.addTab("Settling", settling);
         tabs.addTab("Record", record);
-        tabs.addTab("Diffusivity", new JScrollPane(resultsTable));
+        JScrollPane diffusivity = new JScrollPane(resultsTable);
+        diffusivity.setColumnHeaderView(resultsTable.getTableHeader());
+        tabs.addTab("Diffusivity", diffusivity);
         tabs.addTab("Assumptions and cautions", new JScrollPane(reasoning));
         tabs.addTab("Options", options);
         tabs.setTabLayoutPolicy(JTabbedPane.WRAP_TAB_LAYOUT);

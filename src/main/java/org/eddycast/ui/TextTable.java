@@ -34,10 +34,38 @@ final class TextTable {
         return table;
     }
 
+    /** The table in a scroll pane that shows its header even before the pane is in a window. */
+    javax.swing.JScrollPane scroll() {
+        javax.swing.JScrollPane pane = new javax.swing.JScrollPane(table);
+        pane.setColumnHeaderView(table.getTableHeader());
+        return pane;
+    }
+
     /** Replaces the content. */
     void show(SummaryContent.Table t) {
         model.setRowCount(0);
         model.setColumnIdentifiers(t.header().stream().map(TextTable::headerHtml).toArray());
+        int lines = 1;
+        for (String h : t.header()) {
+            lines = Math.max(lines, headerHtml(h).split("<br>", -1).length);
+        }
+        // a header's height follows its tallest heading, so no unit is cut off
+        java.awt.FontMetrics fm = table.getTableHeader().getFontMetrics(table.getTableHeader().getFont());
+        // columns as wide as their widest cell (within reason), scrolling sideways rather than cutting numbers
+        java.awt.FontMetrics cellFm = table.getFontMetrics(table.getFont());
+        table.setAutoResizeMode(t.header().size() > 4 ? JTable.AUTO_RESIZE_OFF : JTable.AUTO_RESIZE_ALL_COLUMNS);
+        for (int c = 0; c < t.header().size(); c++) {
+            int w = 80;
+            for (String part : t.header().get(c).split(", | \\[")) {
+                w = Math.max(w, fm.stringWidth(part) + 16);
+            }
+            for (List<String> row : t.rows()) {
+                w = Math.max(w, cellFm.stringWidth(row.get(c)) + 16);
+            }
+            table.getColumnModel().getColumn(c).setPreferredWidth(Math.min(w, 360));
+        }
+        table.getTableHeader().setPreferredSize(new java.awt.Dimension(
+                table.getColumnModel().getTotalColumnWidth(), (lines + 1) * fm.getHeight() + 8));
         for (List<String> row : t.rows()) {
             model.addRow(row.toArray());
         }
