@@ -138,6 +138,11 @@ final class ResultsView extends JPanel {
         return rows;
     }
 
+    /** The banner's text (for tests). */
+    String bannerText() {
+        return banner.getText();
+    }
+
     /** The forecast table's rows (for tests). */
     List<List<String>> forecastRows() {
         return forecastTable.rows();
@@ -183,8 +188,19 @@ final class ResultsView extends JPanel {
         chart(settling, settlingSpec);
     }
 
+    /** Tab indices the run moves between. */
+    static final int WIDTH_TAB = 0;
+    static final int SPREAD_TAB = 4;
+
+    private boolean movedToSpread;
+
     void showRunning(String status) {
         banner.setText(status);
+        // the forecast tabs stay empty until the end: show the curves that fill in meanwhile
+        if (tabs.getSelectedIndex() < SPREAD_TAB) {
+            tabs.setSelectedIndex(SPREAD_TAB);
+            movedToSpread = true;
+        }
     }
 
     void showStale() {
@@ -192,6 +208,10 @@ final class ResultsView extends JPanel {
     }
 
     void showResult(StudyResult s) {
+        if (movedToSpread && tabs.getSelectedIndex() == SPREAD_TAB) {
+            tabs.setSelectedIndex(WIDTH_TAB);
+        }
+        movedToSpread = false;
         DiffusivityResult r = s.diffusivity();
         SpreadCurves c = SpreadCurves.of(r);
         spreadSpec = ChartSpecs.spread(c, "Spread of the particle cloud");

@@ -92,7 +92,7 @@ class PanelRunTest {
         // set fields as a user would
         onEdt(() -> panel.form().setValue("flow.rmsVelocity", "0.05"));
         onEdt(() -> assertTrue(panel.form().lastCheck().valid(), () -> panel.form().lastCheck().toString()));
-        runAndWait(panel, "running-" + theme);
+        runAndWait(panel, null);
         shot(panel, "results", theme);
         List<List<String>> rows = callEdt(() -> panel.results().tableRows());
         assertEquals("eddy diffusivity along x", rows.get(0).get(0));
@@ -256,22 +256,35 @@ class PanelRunTest {
         assertTrue(callEdt(holder[0]::statusText).startsWith("All 1 cases run"));
     }
 
-    @Test
-    void cancelFreesThePanelAtOnce() throws Exception {
+    @ParameterizedTest
+    @ValueSource(strings = {"light", "dark"})
+    void cancelFreesThePanelAtOnce(String theme) throws Exception {
         EddycastPanel[] holder = new EddycastPanel[1];
         onEdt(() -> {
+            setTheme(theme);
             holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
                     new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test2")));
-            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 6000")), tmp,
+            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 1000")
+                    .replace("\"particles\": 512", "\"particles\": 4096")), tmp,
                     "long.json");
             holder[0].runAction().actionPerformed(null);
         });
         EddycastPanel panel = holder[0];
         assertTrue(callEdt(panel::isRunning));
+        // wait for the first partial curves (the banner says they fill in), then picture the running state
+        long deadline = System.nanoTime() + 20_000_000_000L;
+        while (!callEdt(() -> panel.results().bannerText()).startsWith("Running:")
+                && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+        shot(panel, "running", theme);
+        assertEquals(ResultsView.SPREAD_TAB, (int) callEdt(() -> panel.results().tabs().getSelectedIndex()),
+                "while running, the curves that fill in are shown");
         onEdt(() -> panel.cancelAction().actionPerformed(null));
         assertFalse(callEdt(panel::isRunning));
         assertEquals("Cancelled", callEdt(panel::progressText));
         onEdt(() -> assertTrue(panel.runAction().isEnabled()));
+        onEdt(() -> setTheme("light"));
     }
 
     @Test
