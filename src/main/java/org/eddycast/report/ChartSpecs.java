@@ -114,7 +114,7 @@ public final class ChartSpecs {
     /** The width measure's name, for labels: the visible edge says at which fraction of the peak it lies. */
     public static String measureName(Forecast f) {
         if (f.measure() == WidthMeasure.VISIBLE_EDGE) {
-            return String.format(java.util.Locale.ROOT, "visible-edge width (at %s%% of the peak)",
+            return String.format(java.util.Locale.ROOT, "visible-edge width at %s%% of the peak",
                     SummaryContent.number(100 * f.edgeFraction()));
         }
         return f.measure().label();

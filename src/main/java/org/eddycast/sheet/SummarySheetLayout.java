@@ -81,8 +81,8 @@ public final class SummarySheetLayout {
             } else {
                 blocks.add(table(rows(List.of("forecast", "value", "95% interval", "unit"), content.forecast()),
                         ROW_COLUMNS, width, BODY));
-                blocks.add(new Caption(text("Forecast at selected points (FWHM: full width at half maximum; the "
-                        + "full grid is in the JSON output):", BODY, width, 2)));
+                blocks.add(new Caption(text("Forecast at selected points (widths in the measure named above, FWHM "
+                        + "standing for full width at half maximum; the full grid is in the JSON output):", BODY, width, 2)));
                 blocks.add(table(content.forecastTable(), content.forecastTable().header().size() == 7
                         ? DISTANCE_TABLE_COLUMNS : TIME_TABLE_COLUMNS, width, SMALL));
             }

@@ -112,7 +112,7 @@ public final class EddycastPanel implements ToolPanel {
         Action saveAs = action("Save as\u2026", KeyEvent.VK_A, KeyStroke.getKeyStroke(KeyEvent.VK_S,
                 InputEvent.CTRL_DOWN_MASK | InputEvent.SHIFT_DOWN_MASK), this::saveAs);
         host.contributeMenu("&File", java.util.Arrays.asList(open, recent, saveAction, saveAs, null,
-                exports.sheetPdf(), exports.print(), exports.chartPng(), exports.chartSvg(), exports.curvesCsv()));
+                exports.sheetPdf(), exports.optionsPdf(), exports.print(), exports.chartPng(), exports.chartSvg(), exports.curvesCsv()));
         Action check = action("Self-check\u2026", KeyEvent.VK_H, null, this::selfCheck);
         host.contributeMenu("&Run", java.util.Arrays.asList(runAction, cancelAction, null, keepAction,
                 clearOptionsAction, null, check));

@@ -270,7 +270,9 @@ final class ResultsView extends JPanel {
             }
             sb.append('\n');
         }
-        sb.append("Widths: FWHM is the full width at half maximum; brackets hold the 95% band.");
+        sb.append("Widths are ").append(ChartSpecs.measureName(f))
+                .append(f.measure() == org.eddycast.forecast.WidthMeasure.FULL_WIDTH_AT_HALF_MAXIMUM
+                        ? " (FWHM)" : "").append("; brackets hold the 95% band.");
         mixing.setText(sb.toString());
         mixing.setCaretPosition(0);
         handbookTable.show(content.handbook());
