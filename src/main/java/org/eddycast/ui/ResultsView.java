@@ -68,13 +68,13 @@ final class ResultsView extends JPanel {
         reasoning.setWrapStyleWord(true);
         reasoning.setName("reasoning");
         JPanel forecast = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
-                "[grow 70,fill][grow 30,fill]"));
+                "[pref!,fill][grow,fill]"));
         forecast.add(forecastTable.scroll());
-        forecast.add(new JScrollPane(mixing));
+        forecast.add(new JScrollPane(mixing), "h 80:120:n");
         JPanel handbook = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
-                "[grow 40,fill][grow 60,fill]"));
+                "[pref!,fill][grow,fill]"));
         handbook.add(handbookTable.scroll());
-        handbook.add(new JScrollPane(handbookNotes));
+        handbook.add(new JScrollPane(handbookNotes), "h 80:120:n");
         tabs.addTab("Width", width);
         tabs.addTab("Peak", peak);
         tabs.addTab("Forecast table", forecast);
@@ -276,6 +276,10 @@ final class ResultsView extends JPanel {
         mixing.setText(sb.toString());
         mixing.setCaretPosition(0);
         handbookTable.show(content.handbook());
+        // on screen: estimate, ratio, agreement, the two values, and the long formula and source last
+        if (!content.handbook().isEmpty()) {
+            handbookTable.showInOrder(0, 4, 5, 2, 3, 1);
+        }
         handbookNotes.setText(content.handbookNotes().isEmpty()
                 ? "No handbook estimate applies to this flow route."
                 : String.join("\n\n", content.handbookNotes()));

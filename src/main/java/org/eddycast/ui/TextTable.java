@@ -66,6 +66,10 @@ final class TextTable {
         }
         table.getTableHeader().setPreferredSize(new java.awt.Dimension(
                 table.getColumnModel().getTotalColumnWidth(), (lines + 1) * fm.getHeight() + 8));
+        // tall enough for every row and a sideways scroll bar, so no row hides below the fold
+        table.setPreferredScrollableViewportSize(new java.awt.Dimension(
+                Math.min(table.getColumnModel().getTotalColumnWidth(), 600),
+                Math.max(1, t.rows().size()) * table.getRowHeight() + 18));
         for (List<String> row : t.rows()) {
             model.addRow(row.toArray());
         }
@@ -75,6 +79,16 @@ final class TextTable {
     static String headerHtml(String h) {
         String escaped = h.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
         return "<html><center>" + escaped.replace(", ", ",<br>").replace(" [", "<br>[") + "</center></html>";
+    }
+
+    /** Puts the content's columns on screen in this order; the content's own order is unchanged. */
+    void showInOrder(int... contentColumns) {
+        for (int place = 0; place < contentColumns.length; place++) {
+            int view = table.convertColumnIndexToView(contentColumns[place]);
+            if (view >= 0 && view != place) {
+                table.moveColumn(view, place);
+            }
+        }
     }
 
     /** The cells as text. */
