@@ -35,6 +35,10 @@ final class CompareCommand implements Callable<Integer> {
     @Option(names = "--json", paramLabel = "FILE", description = "Write every option's result and the verdict as JSON.")
     Path json;
 
+    @Option(names = "--pdf", paramLabel = "SHEET.pdf",
+            description = "Write the comparison sheet as PDF: the options side by side, overlaid widths, the verdict.")
+    Path pdf;
+
     @Mixin
     ThreadsOption threads;
 
@@ -77,6 +81,10 @@ final class CompareCommand implements Callable<Integer> {
             verdict.forEach(v::add);
             AtomicFiles.writeString(json, mapper.writeValueAsString(root));
             out.println("comparison written to " + json);
+        }
+        if (pdf != null) {
+            org.eddycast.sheet.SummarySheetPdf.writeOptions(names, results, pdf);
+            out.println("comparison sheet written to " + pdf);
         }
         return 0;
     }

@@ -34,13 +34,25 @@ public record ChartSpec(String title, String xLabel, String yLabel, boolean logX
      * @param low    lower edge of the band, or null
      * @param high   upper edge of the band, or null
      * @param dashed drawn dashed (reference lines, fits)
+     * @param colour index into the drawing palette's series colours, or -1 for the curve's position; lets a
+     *               reference curve share the colour of the curve it belongs to
      */
-    public record Curve(String name, double[] x, double[] y, double[] low, double[] high, boolean dashed) {
+    public record Curve(String name, double[] x, double[] y, double[] low, double[] high, boolean dashed,
+                        int colour) {
+
+        /** A curve coloured by its position. */
+        public Curve(String name, double[] x, double[] y, double[] low, double[] high, boolean dashed) {
+            this(name, x, y, low, high, dashed, -1);
+        }
 
         public Curve {
             if (x.length != y.length) {
                 throw new IllegalArgumentException("curve " + name + ": " + x.length + " x values but " + y.length
                         + " y values");
+            }
+            if (colour < -1) {
+                throw new IllegalArgumentException("curve " + name + ": colour index " + colour
+                        + " must be -1 (by position) or a palette index from 0");
             }
             if ((low == null) != (high == null) || (low != null && (low.length != x.length
                     || high.length != x.length))) {

@@ -2,6 +2,9 @@ package org.eddycast.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.eddycast.forecast.Comparison;
+import org.eddycast.forecast.Forecast;
+import org.eddycast.forecast.WidthMeasure;
 import org.eddycast.measure.Autocorrelation;
 import org.eddycast.measure.InertialRangeFit;
 import org.eddycast.measure.LogBinnedSpectrum;
@@ -98,5 +101,150 @@ public final class ChartSpecs {
         Autocorrelation r = a.autocorrelation();
         return new ChartSpec("Autocorrelation of the record", "lag (s)", "autocorrelation coefficient (-)", false,
                 false, List.of(ChartSpec.Curve.line("streamwise velocity", r.lagTimes(), r.values(), false)));
+    }
+
+    /** Palette index of the marker for the end of the simulated part. */
+    static final int MARKER_COLOUR = 5;
+
+    /** The horizontal axis label of a forecast chart, with its unit. */
+    public static String gridLabel(Forecast f) {
+        return f.inDistance() ? "distance downstream (m)" : "time after release (s)";
+    }
+
+    /** The width measure's name, for labels: the visible edge says at which fraction of the peak it lies. */
+    public static String measureName(Forecast f) {
+        if (f.measure() == WidthMeasure.VISIBLE_EDGE) {
+            return String.format(java.util.Locale.ROOT, "visible-edge width at %s%% of the peak",
+                    SummaryContent.number(100 * f.edgeFraction()));
+        }
+        return f.measure().label();
+    }
+
+    /**
+     * Plume width per axis over time or distance with its 95% band, a dashed vertical marker where the simulated
+     * curve ends (beyond it widths follow sigma^2(T) + 2 D (t - T)), and dashed handbook curves where a handbook
+     * diffusivity applies: width = factor sqrt(2 eps t) (Fischer et al. 1979, Mixing in Inland and Coastal
+     * Waters, ch. 2: a constant diffusivity spreads a cloud as sigma^2 = 2 eps t). A longitudinal dispersion
+     * coefficient holds only once the tracer is mixed across the section, so its curve starts at the first
+     * mixing figure when that lies on the grid, and is left out otherwise. Both axes logarithmic.
+     */
+    public static ChartSpec width(Forecast f, String title) {
+        double[] grid = f.grid();
+        double[] times = f.times();
+        double[][] w = f.width();
+        double[][] lo = f.widthLow();
+        double[][] hi = f.widthHigh();
+        List<ChartSpec.Curve> curves = new ArrayList<>();
+        double top = 0;
+        double bottom = Double.POSITIVE_INFINITY;
+        for (int a = 0; a < w.length; a++) {
+            double[] low = new double[grid.length];
+            for (int j = 0; j < grid.length; j++) {
+                // a log axis cannot show zero: the band's floor is a thousandth of the width
+                low[j] = Math.max(lo[a][j], 1e-3 * w[a][j]);
+                top = Math.max(top, hi[a][j]);
+                bottom = Math.min(bottom, w[a][j]);
+            }
+            curves.add(new ChartSpec.Curve("width along " + AXES[a] + " (95% band)", grid, w[a], low, hi[a], false,
+                    a));
+        }
+        double factor = f.widthFactor();
+        double mixedFrom = f.mixing().isEmpty() ? Double.NaN : f.mixing().get(0).value();
+        for (Comparison c : f.handbook()) {
+            int axis = handbookAxis(c);
+            if (axis < 0) {
+                continue;
+            }
+            double eps = c.estimate().value();
+            boolean afterMixing = c.estimate().process() == org.eddycast.forecast.MixingProcess.LONGITUDINAL_DISPERSION;
+            List<double[]> points = new ArrayList<>();
+            for (int j = 0; j < grid.length; j++) {
+                if (afterMixing && !(grid[j] >= mixedFrom)) {
+                    continue;
+                }
+                points.add(new double[] {grid[j], factor * Math.sqrt(2 * eps * times[j])});
+            }
+            if (points.size() < 2) {
+                continue;
+            }
+            double[] x = points.stream().mapToDouble(p -> p[0]).toArray();
+            double[] y = points.stream().mapToDouble(p -> p[1]).toArray();
+            curves.add(new ChartSpec.Curve("handbook along " + AXES[axis] + ": " + c.estimate().formula()
+                    + (afterMixing ? ", once mixed across" : ""), x, y, null, null, true, axis));
+        }
+        endMarker(f, bottom, top).ifPresent(curves::add);
+        return new ChartSpec(title + " (" + measureName(f) + ")", gridLabel(f),
+                "plume width, " + SummaryContent.shortMeasure(f) + " (m)", true, true, curves);
+    }
+
+    /** The peak concentration of the instantaneous release over time or distance, with the simulation's end. */
+    public static ChartSpec peak(Forecast f) {
+        double[] p = f.peakConcentration();
+        double top = 0;
+        double bottom = Double.POSITIVE_INFINITY;
+        for (double v : p) {
+            if (v > 0 && Double.isFinite(v)) {
+                top = Math.max(top, v);
+                bottom = Math.min(bottom, v);
+            }
+        }
+        List<ChartSpec.Curve> curves = new ArrayList<>();
+        curves.add(new ChartSpec.Curve("peak concentration of the released mass", f.grid(), p, null, null, false,
+                0));
+        if (top > 0) {
+            endMarker(f, bottom, top).ifPresent(curves::add);
+        }
+        return new ChartSpec("Peak concentration", gridLabel(f), "peak concentration (kg/m\u00b3)", true, true,
+                curves);
+    }
+
+    /**
+     * One width curve per option, overlaid: across the channel (y) when every option is a channel, along x
+     * otherwise; over distance when every option's grid is a distance, over time otherwise.
+     */
+    public static ChartSpec optionWidths(List<String> names, List<Forecast> forecasts) {
+        boolean allDistance = forecasts.stream().allMatch(Forecast::inDistance);
+        int axis = allDistance ? 1 : 0;
+        List<ChartSpec.Curve> curves = new ArrayList<>();
+        for (int o = 0; o < forecasts.size(); o++) {
+            Forecast f = forecasts.get(o);
+            double[] x = allDistance ? f.grid() : f.times();
+            double[] w = f.width()[axis];
+            double[] lo = f.widthLow()[axis];
+            for (int j = 0; j < lo.length; j++) {
+                lo[j] = Math.max(lo[j], 1e-3 * w[j]);
+            }
+            curves.add(new ChartSpec.Curve(names.get(o) + " (" + SummaryContent.shortMeasure(f) + ")", x, w, lo,
+                    f.widthHigh()[axis], false, o));
+        }
+        return new ChartSpec("Options compared: plume width along " + AXES[axis] + " (95% bands)",
+                allDistance ? "distance downstream (m)" : "time after release (s)", "plume width (m)", true, true,
+                curves);
+    }
+
+    /** The axis a handbook diffusivity describes, or -1 when it is not a diffusivity along one axis. */
+    static int handbookAxis(Comparison c) {
+        if (!"m^2/s".equals(c.estimate().unit())) {
+            return -1;
+        }
+        return switch (c.estimate().process()) {
+            case LONGITUDINAL_DISPERSION -> 0;
+            case TRANSVERSE_MIXING -> 1;
+            case VERTICAL_MIXING -> 2;
+            default -> -1;
+        };
+    }
+
+    /** The marker where the simulated part ends; none when it ends outside the grid. */
+    private static java.util.Optional<ChartSpec.Curve> endMarker(Forecast f, double bottom, double top) {
+        double[] grid = f.grid();
+        double[] times = f.times();
+        double end = f.inDistance() ? f.simulatedUntil() * grid[grid.length - 1] / times[times.length - 1]
+                : f.simulatedUntil();
+        if (!(end > grid[0] && end < grid[grid.length - 1])) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of(new ChartSpec.Curve("end of the simulated part (beyond: 2 D t)", new double[] {end, end},
+                new double[] {bottom, top}, null, null, true, MARKER_COLOUR));
     }
 }

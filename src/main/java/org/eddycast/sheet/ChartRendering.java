@@ -70,7 +70,8 @@ public final class ChartRendering {
         renderer.setAlpha(0.22f);
         for (int i = 0; i < spec.curves().size(); i++) {
             ChartSpec.Curve c = spec.curves().get(i);
-            Color colour = palette.series().get(i % palette.series().size());
+            int index = c.colour() >= 0 ? c.colour() : i;
+            Color colour = palette.series().get(index % palette.series().size());
             renderer.setSeriesPaint(i, colour);
             renderer.setSeriesFillPaint(i, colour);
             renderer.setSeriesStroke(i, c.dashed()
@@ -107,7 +108,7 @@ public final class ChartRendering {
         if (log) {
             LogAxis l = new LogAxis(label);
             l.setSmallestValue(1e-300);
-            l.setNumberFormatOverride(new java.text.DecimalFormat("0.#E0"));
+            l.setNumberFormatOverride(new LogTickFormat());
             a = l;
         } else {
             NumberAxis n = new NumberAxis(label);
@@ -126,6 +127,34 @@ public final class ChartRendering {
     /** Draws the spec into an area of a Graphics2D (a PDF page, a printer page, an image or an SVG document). */
     public static void draw(ChartSpec spec, Palette palette, Font font, Graphics2D g, Rectangle2D area) {
         chart(spec, palette, font).draw(g, area);
+    }
+
+    /** Log-axis tick labels: two significant figures, plain decimals for ordinary magnitudes. */
+    static final class LogTickFormat extends java.text.NumberFormat {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public StringBuffer format(double v, StringBuffer sb, java.text.FieldPosition pos) {
+            double a = Math.abs(v);
+            if (v == 0 || !Double.isFinite(v)) {
+                return sb.append(v == 0 ? "0" : String.valueOf(v));
+            }
+            if (a >= 1e-3 && a < 1e5) {
+                return sb.append(new java.math.BigDecimal(v).round(new java.math.MathContext(2))
+                        .stripTrailingZeros().toPlainString());
+            }
+            return sb.append(String.format(java.util.Locale.ROOT, "%.1e", v));
+        }
+
+        @Override
+        public StringBuffer format(long v, StringBuffer sb, java.text.FieldPosition pos) {
+            return format((double) v, sb, pos);
+        }
+
+        @Override
+        public Number parse(String s, java.text.ParsePosition pos) {
+            return null;
+        }
     }
 
     /** Tick labels: plain decimals for ordinary magnitudes, powers of ten for very small or large ones. */

@@ -46,35 +46,59 @@ public final class SummarySheetLayout {
      * @param charts  the charts to include (at most two are drawn)
      */
     public SummarySheetLayout(SummaryContent content, List<ChartSpec> charts) {
-        footer = "eddycast " + content.toolVersion() + " \u2014 " + content.scenarioName() + " \u2014 "
+        String name = content.scenarioName().length() > 60 ? content.scenarioName().substring(0, 57) + "..."
+                : content.scenarioName();
+        footer = "eddycast " + content.toolVersion() + " \u2014 " + name + " \u2014 "
                 + content.date() + " \u2014 screening estimate";
-        FontMetrics body = metrics(BODY);
         double width = PAGE_WIDTH - 2 * MARGIN;
         List<Block> blocks = new ArrayList<>();
         blocks.add(text(content.title(), TITLE, width, 4));
-        blocks.add(text("Scenario: " + content.scenarioName(), HEADING, width, 2));
+        blocks.add(text((content.sideBySide().isEmpty() ? "Scenario: " : "Options: ") + content.scenarioName(),
+                HEADING, width, 2));
         blocks.add(text("Flow route: " + content.route() + ".   Computed " + content.date() + " with eddycast "
                 + content.toolVersion() + ".", BODY, width, 6));
-        blocks.add(heading("Inputs"));
-        blocks.add(table(List.of("input", "value", "", "unit"), content.inputs(), width, body));
-        blocks.add(heading("Results (95% intervals over independent groups of particles)"));
-        blocks.add(table(List.of("quantity", "value", "95% interval", "unit"), content.results(), width, body));
-        blocks.add(heading("Forecast"));
-        if (content.forecast().isEmpty()) {
-            blocks.add(text("Plume width, peak concentration and time or distance to mixed are not part of this "
-                    + "sheet: this build computes the eddy diffusivity only.", BODY, width, 4));
-        } else {
-            blocks.add(table(List.of("forecast", "value", "95% interval", "unit"), content.forecast(), width, body));
+        if (!content.sideBySide().isEmpty()) {
+            blocks.add(heading("Options side by side (* : 95% interval does not overlap the first option's)"));
+            blocks.add(table(content.sideBySide(), null, width, BODY));
+            blocks.add(heading("Verdict"));
+            blocks.add(text(content.verdict(), BODY, width, 4));
         }
-        blocks.add(heading("Handbook comparison"));
-        if (content.handbook().isEmpty()) {
-            blocks.add(text("No handbook estimate is listed for this scenario in this build.", BODY, width, 4));
-        } else {
-            blocks.add(table(List.of("handbook estimate", "value", "range", "unit"), content.handbook(), width,
-                    body));
+        if (!content.inputs().isEmpty()) {
+            blocks.add(heading("Inputs"));
+            blocks.add(table(rows(List.of("input", "value", "", "unit"), content.inputs()), ROW_COLUMNS, width,
+                    BODY));
         }
-        for (ChartSpec c : charts.subList(0, Math.min(2, charts.size()))) {
-            blocks.add(chart(c, width, 250));
+        if (!content.results().isEmpty()) {
+            blocks.add(heading("Results (95% intervals over independent groups of particles)"));
+            blocks.add(table(rows(List.of("quantity", "value", "95% interval", "unit"), content.results()),
+                    ROW_COLUMNS, width, BODY));
+        }
+        if (content.sideBySide().isEmpty()) {
+            blocks.add(heading("Forecast"));
+            if (content.forecast().isEmpty()) {
+                blocks.add(text("Plume width, peak concentration and time or distance to mixed are not part of "
+                        + "this sheet: this result carries no forecast.", BODY, width, 4));
+            } else {
+                blocks.add(table(rows(List.of("forecast", "value", "95% interval", "unit"), content.forecast()),
+                        ROW_COLUMNS, width, BODY));
+                blocks.add(new Caption(text("Forecast at selected points (widths in the measure named above, FWHM "
+                        + "standing for full width at half maximum; the full grid is in the JSON output):", BODY, width, 2)));
+                blocks.add(table(content.forecastTable(), content.forecastTable().header().size() == 7
+                        ? DISTANCE_TABLE_COLUMNS : TIME_TABLE_COLUMNS, width, SMALL));
+            }
+        }
+        if (!content.handbook().isEmpty()) {
+            blocks.add(heading("Handbook comparison (neither value adjusted to match the other)"));
+            blocks.add(table(content.handbook(), HANDBOOK_COLUMNS, width, SMALL));
+            for (String n : content.handbookNotes()) {
+                blocks.add(text("\u2022 " + n, BODY, width, 2));
+            }
+        } else if (content.sideBySide().isEmpty() && !content.forecast().isEmpty()) {
+            blocks.add(heading("Handbook comparison"));
+            blocks.add(text("No handbook estimate applies to this flow route.", BODY, width, 4));
+        }
+        for (ChartSpec c : charts.subList(0, Math.min(MAX_CHARTS, charts.size()))) {
+            blocks.add(chart(c, width, 300));
         }
         blocks.add(heading("Assumptions and how values were obtained"));
         for (String a : content.assumptions()) {
@@ -89,6 +113,39 @@ public final class SummarySheetLayout {
             blocks.add(text(r, SMALL, width, 1));
         }
         paginate(blocks);
+    }
+
+    /** The most charts a sheet draws. */
+    public static final int MAX_CHARTS = 3;
+
+    /** Column starts (fractions of the text width) for quantity, value, interval, unit rows. */
+    private static final double[] ROW_COLUMNS = {0, 0.42, 0.62, 0.86};
+
+    /** Column starts for the handbook table: the formula and source get the most room. */
+    private static final double[] HANDBOOK_COLUMNS = {0, 0.15, 0.38, 0.56, 0.74, 0.86};
+
+    /** Column starts for a forecast table over distance (distance, time, three widths, peak, source). */
+    private static final double[] DISTANCE_TABLE_COLUMNS = {0, 0.13, 0.22, 0.39, 0.55, 0.71, 0.87};
+
+    /** Column starts for a forecast table over time (time, three widths, peak, source). */
+    private static final double[] TIME_TABLE_COLUMNS = {0, 0.1, 0.29, 0.48, 0.67, 0.85};
+
+    /** A block kept on the same page as the block after it. */
+    private record Caption(Block inner) implements Block {
+        @Override
+        public double height() {
+            return inner.height();
+        }
+
+        @Override
+        public void draw(Graphics2D g, double x, double y, double w) {
+            inner.draw(g, x, y, w);
+        }
+    }
+
+    private static SummaryContent.Table rows(List<String> header, List<SummaryContent.Row> rows) {
+        return new SummaryContent.Table(header, rows.stream()
+                .map(r -> List.of(r.quantity(), r.value(), r.interval(), r.unit())).toList());
     }
 
     /** The number of pages. */
@@ -119,7 +176,7 @@ public final class SummarySheetLayout {
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
             // keep a heading with what follows it
-            double need = b.height() + (b instanceof Heading && i + 1 < blocks.size()
+            double need = b.height() + ((b instanceof Heading || b instanceof Caption) && i + 1 < blocks.size()
                     ? Math.min(blocks.get(i + 1).height(), 60) : 0);
             if (used + need > usable && !page.isEmpty()) {
                 pages.add(page);
@@ -201,45 +258,121 @@ public final class SummarySheetLayout {
         return new Heading(s);
     }
 
-    private static Block table(List<String> header, List<SummaryContent.Row> rows, double width, FontMetrics fm) {
-        double[] columns = {0, 0.42, 0.62, 0.86};
-        double lineHeight = fm.getHeight() + 1;
-        List<List<String>> cells = new ArrayList<>();
-        for (SummaryContent.Row r : rows) {
-            cells.add(List.of(r.quantity(), r.value(), r.interval(), r.unit()));
+    /**
+     * A table whose cells wrap onto as many lines as they need, so nothing is cut off. Column starts are
+     * fractions of the width; null spreads the columns evenly, the first one a little wider.
+     */
+    private static Block table(SummaryContent.Table table, double[] starts, double width, Font font) {
+        int columns = table.header().size();
+        double[] at = starts != null ? starts : evenColumns(columns);
+        FontMetrics fm = metrics(font);
+        FontMetrics bold = metrics(font.deriveFont(Font.BOLD));
+        double lineHeight = fm.getHeight();
+        List<List<List<String>>> cells = new ArrayList<>();
+        List<List<String>> header = new ArrayList<>();
+        int headerLines = 1;
+        for (int c = 0; c < columns; c++) {
+            List<String> lines = wrapCell(table.header().get(c), bold, columnWidth(at, c, width));
+            header.add(lines);
+            headerLines = Math.max(headerLines, lines.size());
         }
+        List<Integer> heights = new ArrayList<>();
+        for (List<String> row : table.rows()) {
+            List<List<String>> wrapped = new ArrayList<>();
+            int lines = 1;
+            for (int c = 0; c < columns; c++) {
+                List<String> l = wrapCell(row.get(c), fm, columnWidth(at, c, width));
+                wrapped.add(l);
+                lines = Math.max(lines, l.size());
+            }
+            cells.add(wrapped);
+            heights.add(lines);
+        }
+        int totalLines = heightsSum(heights) + headerLines;
+        int finalHeaderLines = headerLines;
         return new Block() {
             @Override
             public double height() {
-                return (rows.size() + 1) * lineHeight + 6;
+                return totalLines * lineHeight + 2 * table.rows().size() + 8;
             }
 
             @Override
             public void draw(Graphics2D g, double x, double y, double w) {
                 g.setColor(INK);
-                g.setFont(BODY.deriveFont(Font.BOLD));
-                for (int c = 0; c < header.size(); c++) {
-                    g.drawString(header.get(c), (float) (x + columns[c] * w), (float) (y + fm.getAscent()));
+                g.setFont(font.deriveFont(Font.BOLD));
+                for (int c = 0; c < columns; c++) {
+                    List<String> lines = header.get(c);
+                    for (int i = 0; i < lines.size(); i++) {
+                        g.drawString(lines.get(i), (float) (x + at[c] * w),
+                                (float) (y + fm.getAscent() + i * lineHeight));
+                    }
                 }
-                g.setFont(BODY);
+                g.setFont(font);
+                double top = y + finalHeaderLines * lineHeight + 2;
                 for (int r = 0; r < cells.size(); r++) {
-                    double baseline = y + (r + 1) * lineHeight + fm.getAscent();
+                    double rowHeight = heights.get(r) * lineHeight + 2;
                     if (r % 2 == 0) {
                         g.setColor(new Color(0xf1, 0xf4, 0xf6));
-                        g.fill(new Rectangle2D.Double(x, baseline - fm.getAscent(), w, lineHeight));
-                        g.setColor(INK);
+                        g.fill(new Rectangle2D.Double(x, top, w, rowHeight));
                     }
-                    for (int c = 0; c < 4; c++) {
-                        String s = cells.get(r).get(c);
-                        double limit = (c < 3 ? columns[c + 1] - columns[c] : 1 - columns[c]) * w - 4;
-                        while (fm.stringWidth(s) > limit && s.length() > 4) {
-                            s = s.substring(0, s.length() - 4) + "...";
+                    g.setColor(INK);
+                    for (int c = 0; c < columns; c++) {
+                        List<String> lines = cells.get(r).get(c);
+                        for (int i = 0; i < lines.size(); i++) {
+                            g.drawString(lines.get(i), (float) (x + at[c] * w),
+                                    (float) (top + 1 + fm.getAscent() + i * lineHeight));
                         }
-                        g.drawString(s, (float) (x + columns[c] * w), (float) baseline);
                     }
+                    top += rowHeight;
                 }
             }
         };
+    }
+
+    private static int heightsSum(List<Integer> heights) {
+        return heights.stream().mapToInt(Integer::intValue).sum();
+    }
+
+    private static double[] evenColumns(int n) {
+        double[] at = new double[n];
+        double first = n > 1 ? 1.4 / (n + 0.4) : 1;
+        for (int c = 1; c < n; c++) {
+            at[c] = first + (c - 1) * (1 - first) / (n - 1);
+        }
+        return at;
+    }
+
+    private static double columnWidth(double[] at, int c, double width) {
+        return ((c + 1 < at.length ? at[c + 1] : 1) - at[c]) * width - 5;
+    }
+
+    /** Wraps a cell at spaces; a word longer than the column is broken where it must be. */
+    static List<String> wrapCell(String text, FontMetrics fm, double width) {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.split(" ")) {
+            while (fm.stringWidth(word) > width && word.length() > 1) {
+                int cut = word.length() - 1;
+                while (cut > 1 && fm.stringWidth(word.substring(0, cut)) > width) {
+                    cut--;
+                }
+                if (!line.isEmpty()) {
+                    lines.add(line.toString());
+                    line = new StringBuilder();
+                }
+                lines.add(word.substring(0, cut));
+                word = word.substring(cut);
+            }
+            String candidate = line.isEmpty() ? word : line + " " + word;
+            if (fm.stringWidth(candidate) > width && !line.isEmpty()) {
+                lines.add(line.toString());
+                line = new StringBuilder(word);
+            } else {
+                line = new StringBuilder(candidate);
+            }
+        }
+        lines.add(line.toString());
+        return lines;
     }
 
     private static Block chart(ChartSpec spec, double width, double height) {

@@ -32,11 +32,31 @@ public final class SummarySheetPdf {
         write(SummaryContent.of(result), defaultCharts(result), target);
     }
 
-    /** The charts a study's sheet carries. */
+    /**
+     * The charts a study's sheet carries: plume width with its band and the handbook curves, peak
+     * concentration, and the running diffusivity settling; without a forecast, the cloud's spread instead.
+     */
     public static List<ChartSpec> defaultCharts(StudyResult result) {
         SpreadCurves c = SpreadCurves.of(result.diffusivity());
-        return List.of(ChartSpecs.spread(c, "Spread of the particle cloud"),
-                ChartSpecs.settling(c, result.diffusivity().axes()));
+        ChartSpec settling = ChartSpecs.settling(c, result.diffusivity().axes());
+        if (result.forecast() == null) {
+            return List.of(ChartSpecs.spread(c, "Spread of the particle cloud"), settling);
+        }
+        return List.of(ChartSpecs.width(result.forecast(), "Plume width"), ChartSpecs.peak(result.forecast()),
+                settling);
+    }
+
+    /** The comparison sheet of design options (two or more): side by side, overlaid widths, the verdict. */
+    public static void writeOptions(List<String> names, List<StudyResult> options, Path target) throws IOException {
+        write(SummaryContent.ofOptions(names, options), optionCharts(names, options), target);
+    }
+
+    /** The charts of a comparison sheet: the options' widths overlaid, when every option has a forecast. */
+    public static List<ChartSpec> optionCharts(List<String> names, List<StudyResult> options) {
+        if (options.stream().anyMatch(o -> o.forecast() == null)) {
+            return List.of();
+        }
+        return List.of(ChartSpecs.optionWidths(names, options.stream().map(StudyResult::forecast).toList()));
     }
 
     /** Writes the given content and charts. */

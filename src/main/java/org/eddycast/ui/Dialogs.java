@@ -13,6 +13,9 @@ interface Dialogs {
 
     void tell(String title, String message);
 
+    /** Tells of a fault in plain words, with the technical details one step away. */
+    void fault(String title, String message, String details);
+
     /** Dialogs shown with JOptionPane over a parent. */
     static Dialogs over(java.util.function.Supplier<Component> parent) {
         return new Dialogs() {
@@ -27,6 +30,30 @@ interface Dialogs {
             @Override
             public void tell(String title, String message) {
                 JOptionPane.showMessageDialog(parent.get(), message, title, JOptionPane.WARNING_MESSAGE);
+            }
+
+            @Override
+            public void fault(String title, String message, String details) {
+                javax.swing.JTextArea text = new javax.swing.JTextArea(details, 14, 70);
+                text.setEditable(false);
+                javax.swing.JScrollPane scroll = new javax.swing.JScrollPane(text);
+                scroll.setVisible(false);
+                javax.swing.JCheckBox show = new javax.swing.JCheckBox("Show details");
+                show.setMnemonic('D');
+                show.addActionListener(e -> {
+                    scroll.setVisible(show.isSelected());
+                    java.awt.Window w = javax.swing.SwingUtilities.getWindowAncestor(show);
+                    if (w != null) {
+                        w.pack();
+                    }
+                });
+                javax.swing.JPanel p = new javax.swing.JPanel(new net.miginfocom.swing.MigLayout("insets 0, wrap 1",
+                        "[grow,fill]"));
+                p.add(new javax.swing.JLabel("<html><body style='width: 420px'>" + message.replace("&", "&amp;")
+                        .replace("<", "&lt;").replace("\n", "<br>") + "</body></html>"));
+                p.add(show);
+                p.add(scroll, "hidemode 3");
+                JOptionPane.showMessageDialog(parent.get(), p, title, JOptionPane.ERROR_MESSAGE);
             }
         };
     }

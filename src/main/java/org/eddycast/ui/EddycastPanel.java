@@ -61,6 +61,7 @@ public final class EddycastPanel implements ToolPanel {
     private String documentName = "untitled";
     private boolean modified;
     private int threads = Engine.defaultThreads();
+    private StudyWorker.Runner runner = Engine::run;
 
     /** A panel over a host; dialogs appear over the host's window. */
     public EddycastPanel(HostContext host) {
@@ -111,7 +112,7 @@ public final class EddycastPanel implements ToolPanel {
         Action saveAs = action("Save as\u2026", KeyEvent.VK_A, KeyStroke.getKeyStroke(KeyEvent.VK_S,
                 InputEvent.CTRL_DOWN_MASK | InputEvent.SHIFT_DOWN_MASK), this::saveAs);
         host.contributeMenu("&File", java.util.Arrays.asList(open, recent, saveAction, saveAs, null,
-                exports.sheetPdf(), exports.print(), exports.chartPng(), exports.chartSvg(), exports.curvesCsv()));
+                exports.sheetPdf(), exports.optionsPdf(), exports.print(), exports.chartPng(), exports.chartSvg(), exports.curvesCsv()));
         Action check = action("Self-check\u2026", KeyEvent.VK_H, null, this::selfCheck);
         host.contributeMenu("&Run", java.util.Arrays.asList(runAction, cancelAction, null, keepAction,
                 clearOptionsAction, null, check));
@@ -145,6 +146,11 @@ public final class EddycastPanel implements ToolPanel {
     /** Runs after each finished run, on the event thread. */
     public void addResultListener(Consumer<StudyResult> l) {
         resultListeners.add(l);
+    }
+
+    /** Runs go through this runner (tests put a failing one here). */
+    void setRunner(StudyWorker.Runner runner) {
+        this.runner = runner;
     }
 
     /** The worker threads runs use. */
@@ -328,7 +334,7 @@ public final class EddycastPanel implements ToolPanel {
         progress.setString("Starting\u2026");
         results.showRunning("Running \"" + c.scenario().name() + "\"\u2026");
         host.showStatus("Running " + c.scenario().name());
-        worker = new StudyWorker(c.scenario(), threads, this::progressed, this::finished);
+        worker = new StudyWorker(runner, c.scenario(), threads, this::progressed, this::finished);
         worker.execute();
     }
 
@@ -397,11 +403,16 @@ public final class EddycastPanel implements ToolPanel {
                 return;
             }
             progress.setString("Failed");
-            String why = cause instanceof IllegalArgumentException || cause instanceof IOException
-                    || cause instanceof org.eddycast.particles.NumericalBlowupException
-                    ? cause.getMessage() : "internal fault: " + cause;
-            dialogs.tell("The run stopped", why);
-            host.showStatus("Run failed: " + why);
+            boolean inputProblem = cause instanceof IllegalArgumentException || cause instanceof IOException
+                    || cause instanceof org.eddycast.particles.NumericalBlowupException;
+            String what = cause.getMessage() == null ? cause.getClass().getSimpleName() : cause.getMessage();
+            boolean logged = ErrorLog.append("run of \"" + documentName + "\" failed", cause);
+            String why = inputProblem ? what : "an internal fault stopped the run (" + what + "). The form and "
+                    + "the last result are kept; please report this with the log.";
+            String where = logged ? "The details were written to " + ErrorLog.file() + "."
+                    : "The log " + ErrorLog.file() + " could not be written; the details are below.";
+            dialogs.fault("The run stopped", why + "\n" + where, ErrorLog.details(cause));
+            host.showStatus("Run failed: " + what);
         } catch (java.util.concurrent.CancellationException e) {
             progress.setString("Cancelled");
         }
@@ -426,7 +437,21 @@ public final class EddycastPanel implements ToolPanel {
     }
 
     private void selfCheck() {
-        new SelfCheckDialog(host.dialogParent(), threads).setVisible(true);
+        SelfCheckPanel panel = new SelfCheckPanel(org.eddycast.engine.VerificationSuite.cases(), threads);
+        javax.swing.JDialog d = new javax.swing.JDialog(javax.swing.SwingUtilities.getWindowAncestor(
+                host.dialogParent()), "Self-check", java.awt.Dialog.ModalityType.MODELESS);
+        d.setContentPane(panel);
+        d.pack();
+        d.setLocationRelativeTo(host.dialogParent());
+        d.addWindowListener(new java.awt.event.WindowAdapter() {
+            @Override
+            public void windowClosed(java.awt.event.WindowEvent e) {
+                panel.stop();
+            }
+        });
+        d.setDefaultCloseOperation(javax.swing.WindowConstants.DISPOSE_ON_CLOSE);
+        panel.start();
+        d.setVisible(true);
     }
 
     private void bindKeys(Action... actions) {

@@ -47,6 +47,19 @@ final class Exports {
                         () -> SummarySheetPdf.write(r, p)))));
     }
 
+    Action optionsPdf() {
+        return EddycastPanel.action("Export options sheet (PDF)\u2026", KeyEvent.VK_N, null, () -> {
+            OptionsView options = view.options();
+            if (options.count() < 2) {
+                dialogs.tell("No comparison yet", "Keep two or more results as options (Run \u25b8 Keep result as "
+                        + "option, Ctrl+K) before exporting their comparison.");
+                return;
+            }
+            host.chooseFileToSave("Options sheet", "pdf", null).ifPresent(p -> guarded(p,
+                    () -> SummarySheetPdf.writeOptions(options.names(), options.results(), p)));
+        });
+    }
+
     Action print() {
         return EddycastPanel.action("Print summary sheet\u2026", KeyEvent.VK_P, null, () -> withResult(r -> {
             PrinterJob job = PrinterJob.getPrinterJob();

@@ -1,7 +1,6 @@
 package org.eddycast.ui;
 
 import java.util.List;
-import org.eddycast.scenario.ForecastSettings;
 import org.eddycast.scenario.ImpellerType;
 
 /** The form's sections and fields, in order, as plain data. */
@@ -55,7 +54,9 @@ public final class FormLayout {
                     FieldSpec.choice("release.location", null, List.of("centre-line", "bank")))),
             new Section("section.forecast", List.of(
                     FieldSpec.number("forecast.horizon", "s", null, true),
-                    FieldSpec.choice("forecast.widthMeasure", null, ForecastSettings.WIDTH_MEASURES),
+                    // the scenario file's default (full width at half maximum) first, so an empty form shows it
+                    FieldSpec.choice("forecast.widthMeasure", null, List.of("fwhm", "standard-deviation",
+                            "visible-edge")),
                     FieldSpec.number("forecast.edgeFraction", "", null, true))),
             new Section("section.accuracy", List.of(
                     FieldSpec.integer("simulation.particles", null, true),

@@ -61,7 +61,9 @@ final class OptionsView extends JPanel {
         verdict.setWrapStyleWord(true);
         verdict.setName("verdict");
         add(chartHolder);
-        add(new JScrollPane(table));
+        JScrollPane scroll = new JScrollPane(table);
+        scroll.setColumnHeaderView(table.getTableHeader());
+        add(scroll);
         add(verdict, "hmin 48");
         refresh();
     }
@@ -96,8 +98,11 @@ final class OptionsView extends JPanel {
         return verdict.getText();
     }
 
-    /** The overlaid chart: the variance along x of every option. */
+    /** The overlaid chart: every option's plume width (or, without forecasts, its variance along x). */
     ChartSpec chartSpec() {
+        if (results.stream().allMatch(r -> r.forecast() != null)) {
+            return ChartSpecs.optionWidths(names, results.stream().map(StudyResult::forecast).toList());
+        }
         List<ChartSpec.Curve> curves = new ArrayList<>();
         for (int i = 0; i < results.size(); i++) {
             ChartSpec.Curve c = ChartSpecs.spread(SpreadCurves.of(results.get(i).diffusivity()), "").curves().get(0);
@@ -131,6 +136,21 @@ final class OptionsView extends JPanel {
                     var e = comparison.values().get(o).get(a);
                     row[o + 1] = SummaryContent.number(e.value()) + "  [" + SummaryContent.number(e.low()) + ", "
                             + SummaryContent.number(e.high()) + "]";
+                }
+                model.addRow(row);
+            }
+            if (results.stream().anyMatch(r -> r.forecast() != null && !r.forecast().mixing().isEmpty())) {
+                Object[] row = new Object[names.size() + 1];
+                row[0] = "first mixing figure";
+                for (int o = 0; o < names.size(); o++) {
+                    var f = results.get(o).forecast();
+                    if (f == null || f.mixing().isEmpty()) {
+                        row[o + 1] = "\u2014";
+                    } else {
+                        var m = f.mixing().get(0);
+                        row[o + 1] = m.name() + ": " + SummaryContent.number(m.value()) + " " + m.unit() + "  ["
+                                + SummaryContent.number(m.low()) + ", " + SummaryContent.number(m.high()) + "]";
+                    }
                 }
                 model.addRow(row);
             }

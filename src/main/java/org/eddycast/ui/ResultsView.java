@@ -15,6 +15,7 @@ import net.miginfocom.swing.MigLayout;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.forecast.Cautions;
+import org.eddycast.forecast.Forecast;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.ChartSpecs;
 import org.eddycast.report.SpreadCurves;
@@ -30,6 +31,12 @@ import org.jfree.chart.ChartPanel;
 final class ResultsView extends JPanel {
 
     private final JTabbedPane tabs = new JTabbedPane();
+    private final JPanel width = new JPanel(new BorderLayout());
+    private final JPanel peak = new JPanel(new BorderLayout());
+    private final TextTable forecastTable = new TextTable("forecast");
+    private final JTextArea mixing = area("mixing");
+    private final TextTable handbookTable = new TextTable("handbook");
+    private final JTextArea handbookNotes = area("handbookNotes");
     private final JPanel spread = new JPanel(new BorderLayout());
     private final JPanel settling = new JPanel(new BorderLayout());
     private final JPanel record = new JPanel(new MigLayout("insets 0, wrap 1, fill", "[grow,fill]", "[grow,fill][grow,fill]"));
@@ -46,6 +53,8 @@ final class ResultsView extends JPanel {
     private final OptionsView options = new OptionsView();
     private ChartSpec spreadSpec;
     private ChartSpec settlingSpec;
+    private ChartSpec widthSpec;
+    private ChartSpec peakSpec;
 
     ResultsView() {
         super(new BorderLayout());
@@ -58,14 +67,31 @@ final class ResultsView extends JPanel {
         reasoning.setLineWrap(true);
         reasoning.setWrapStyleWord(true);
         reasoning.setName("reasoning");
+        JPanel forecast = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
+                "[pref!,fill][grow,fill]"));
+        forecast.add(forecastTable.scroll());
+        forecast.add(new JScrollPane(mixing), "h 80:120:n");
+        JPanel handbook = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
+                "[pref!,fill][grow,fill]"));
+        handbook.add(handbookTable.scroll());
+        handbook.add(new JScrollPane(handbookNotes), "h 80:120:n");
+        tabs.addTab("Width", width);
+        tabs.addTab("Peak", peak);
+        tabs.addTab("Forecast table", forecast);
+        tabs.addTab("Handbook", handbook);
         tabs.addTab("Spread", spread);
         tabs.addTab("Settling", settling);
         tabs.addTab("Record", record);
-        tabs.addTab("Table", new JScrollPane(resultsTable));
+        JScrollPane diffusivity = new JScrollPane(resultsTable);
+        diffusivity.setColumnHeaderView(resultsTable.getTableHeader());
+        tabs.addTab("Diffusivity", diffusivity);
         tabs.addTab("Assumptions and cautions", new JScrollPane(reasoning));
         tabs.addTab("Options", options);
-        int[] keys = {java.awt.event.KeyEvent.VK_S, java.awt.event.KeyEvent.VK_E, java.awt.event.KeyEvent.VK_D,
-                java.awt.event.KeyEvent.VK_T, java.awt.event.KeyEvent.VK_A, java.awt.event.KeyEvent.VK_O};
+        tabs.setTabLayoutPolicy(JTabbedPane.WRAP_TAB_LAYOUT);
+        int[] keys = {java.awt.event.KeyEvent.VK_W, java.awt.event.KeyEvent.VK_P, java.awt.event.KeyEvent.VK_T,
+                java.awt.event.KeyEvent.VK_H, java.awt.event.KeyEvent.VK_S, java.awt.event.KeyEvent.VK_E,
+                java.awt.event.KeyEvent.VK_C, java.awt.event.KeyEvent.VK_I, java.awt.event.KeyEvent.VK_A,
+                java.awt.event.KeyEvent.VK_O};
         for (int i = 0; i < keys.length; i++) {
             tabs.setMnemonicAt(i, keys[i]);
         }
@@ -84,6 +110,12 @@ final class ResultsView extends JPanel {
     /** The charts currently shown (for export). */
     List<ChartSpec> charts() {
         List<ChartSpec> list = new ArrayList<>();
+        if (widthSpec != null) {
+            list.add(widthSpec);
+        }
+        if (peakSpec != null) {
+            list.add(peakSpec);
+        }
         if (spreadSpec != null) {
             list.add(spreadSpec);
         }
@@ -106,10 +138,38 @@ final class ResultsView extends JPanel {
         return rows;
     }
 
+    /** The banner's text (for tests). */
+    String bannerText() {
+        return banner.getText();
+    }
+
+    /** The forecast table's rows (for tests). */
+    List<List<String>> forecastRows() {
+        return forecastTable.rows();
+    }
+
+    /** The handbook table's rows (for tests). */
+    List<List<String>> handbookRows() {
+        return handbookTable.rows();
+    }
+
+    /** The assumptions and cautions as shown (for tests). */
+    String reasoningText() {
+        return reasoning.getText();
+    }
+
     void showEmpty() {
         banner.setText("No result yet: fill in the form and press Run (Ctrl+R).");
         spreadSpec = null;
         settlingSpec = null;
+        widthSpec = null;
+        peakSpec = null;
+        placeholder(width, "The forecast plume width appears here when a run finishes.");
+        placeholder(peak, "The forecast peak concentration appears here when a run finishes.");
+        forecastTable.show(SummaryContent.Table.EMPTY);
+        handbookTable.show(SummaryContent.Table.EMPTY);
+        mixing.setText("");
+        handbookNotes.setText("");
         placeholder(spread, "The spread of the particle cloud appears here while the simulation runs.");
         placeholder(settling, "The running eddy diffusivity appears here while the simulation runs.");
         record.removeAll();
@@ -128,8 +188,19 @@ final class ResultsView extends JPanel {
         chart(settling, settlingSpec);
     }
 
+    /** Tab indices the run moves between. */
+    static final int WIDTH_TAB = 0;
+    static final int SPREAD_TAB = 4;
+
+    private boolean movedToSpread;
+
     void showRunning(String status) {
         banner.setText(status);
+        // the forecast tabs stay empty until the end: show the curves that fill in meanwhile
+        if (tabs.getSelectedIndex() < SPREAD_TAB) {
+            tabs.setSelectedIndex(SPREAD_TAB);
+            movedToSpread = true;
+        }
     }
 
     void showStale() {
@@ -137,6 +208,10 @@ final class ResultsView extends JPanel {
     }
 
     void showResult(StudyResult s) {
+        if (movedToSpread && tabs.getSelectedIndex() == SPREAD_TAB) {
+            tabs.setSelectedIndex(WIDTH_TAB);
+        }
+        movedToSpread = false;
         DiffusivityResult r = s.diffusivity();
         SpreadCurves c = SpreadCurves.of(r);
         spreadSpec = ChartSpecs.spread(c, "Spread of the particle cloud");
@@ -151,14 +226,12 @@ final class ResultsView extends JPanel {
             record.add(new JLabel("This route has no measured record.", JLabel.CENTER));
         }
         table.setRowCount(0);
-        for (SummaryContent.Row row : SummaryContent.of(s).results()) {
+        SummaryContent content = SummaryContent.of(s);
+        for (SummaryContent.Row row : content.results()) {
             table.addRow(new Object[] {row.quantity(), row.value(), row.interval(), row.unit()});
         }
-        List<String> assumptions = new ArrayList<>(s.flow().assumptions());
-        assumptions.addAll(s.flow().warnings().stream().map(w -> "Warning: " + w).toList());
-        assumptions.addAll(r.warnings().stream().map(w -> "Warning: " + w).toList());
-        assumptions.addAll(r.notes().stream().map(n -> "Note: " + n).toList());
-        reasoning.setText(cautionsText(assumptions));
+        showForecast(s, content);
+        reasoning.setText(cautionsText(content.assumptions(), content.cautions()));
         reasoning.setCaretPosition(0);
         int warnings = s.flow().warnings().size() + r.warnings().size();
         banner.setText(String.format(Locale.ROOT, "Result of \"%s\" (%.1f s)%s", s.scenario().name(),
@@ -168,7 +241,65 @@ final class ResultsView extends JPanel {
         repaint();
     }
 
+    private void showForecast(StudyResult s, SummaryContent content) {
+        Forecast f = s.forecast();
+        if (f == null) {
+            widthSpec = null;
+            peakSpec = null;
+            placeholder(width, "This result carries no forecast.");
+            placeholder(peak, "This result carries no forecast.");
+            forecastTable.show(SummaryContent.Table.EMPTY);
+            handbookTable.show(SummaryContent.Table.EMPTY);
+            mixing.setText("");
+            handbookNotes.setText("");
+            return;
+        }
+        widthSpec = ChartSpecs.width(f, "Plume width");
+        peakSpec = ChartSpecs.peak(f);
+        chart(width, widthSpec);
+        chart(peak, peakSpec);
+        forecastTable.show(content.forecastTable());
+        StringBuilder sb = new StringBuilder();
+        for (SummaryContent.Row row : content.forecast()) {
+            sb.append(row.quantity()).append(": ").append(row.value());
+            if (!row.unit().isEmpty()) {
+                sb.append(' ').append(row.unit());
+            }
+            if (!row.interval().isEmpty()) {
+                sb.append("   95% interval ").append(row.interval()).append(' ').append(row.unit());
+            }
+            sb.append('\n');
+        }
+        sb.append("Widths are ").append(ChartSpecs.measureName(f))
+                .append(f.measure() == org.eddycast.forecast.WidthMeasure.FULL_WIDTH_AT_HALF_MAXIMUM
+                        ? " (FWHM)" : "").append("; brackets hold the 95% band.");
+        mixing.setText(sb.toString());
+        mixing.setCaretPosition(0);
+        handbookTable.show(content.handbook());
+        // on screen: estimate, ratio, agreement, the two values, and the long formula and source last
+        if (!content.handbook().isEmpty()) {
+            handbookTable.showInOrder(0, 4, 5, 2, 3, 1);
+        }
+        handbookNotes.setText(content.handbookNotes().isEmpty()
+                ? "No handbook estimate applies to this flow route."
+                : String.join("\n\n", content.handbookNotes()));
+        handbookNotes.setCaretPosition(0);
+    }
+
+    private static JTextArea area(String name) {
+        JTextArea a = new JTextArea();
+        a.setEditable(false);
+        a.setLineWrap(true);
+        a.setWrapStyleWord(true);
+        a.setName(name);
+        return a;
+    }
+
     private static String cautionsText(List<String> assumptions) {
+        return cautionsText(assumptions, Cautions.ALL);
+    }
+
+    private static String cautionsText(List<String> assumptions, List<String> cautions) {
         StringBuilder sb = new StringBuilder();
         if (!assumptions.isEmpty()) {
             sb.append("How this result was obtained\n");
@@ -178,7 +309,7 @@ final class ResultsView extends JPanel {
             sb.append('\n');
         }
         sb.append("Cautions\n");
-        for (String c : Cautions.ALL) {
+        for (String c : cautions) {
             sb.append("  \u2022 ").append(c).append('\n');
         }
         return sb.toString();

@@ -398,6 +398,14 @@ public final class ScenarioForm extends JPanel {
             editor = switch (spec.kind()) {
                 case CHOICE -> {
                     JComboBox<String> c = new JComboBox<>(spec.choices().toArray(String[]::new));
+                    c.setRenderer(new javax.swing.DefaultListCellRenderer() {
+                        @Override
+                        public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list,
+                                Object value, int index, boolean selected, boolean focus) {
+                            return super.getListCellRendererComponent(list, choiceWords(value), index, selected,
+                                    focus);
+                        }
+                    });
                     c.addActionListener(e -> changed());
                     yield c;
                 }
@@ -533,5 +541,18 @@ public final class ScenarioForm extends JPanel {
                     .toPlainString();
         }
         return String.format(Locale.ROOT, "%.6g", v).replaceAll("\\.?0+e", "e");
+    }
+
+    /** A choice's key in words (the file keeps the key). */
+    static Object choiceWords(Object key) {
+        if (!(key instanceof String k)) {
+            return key;
+        }
+        return switch (k) {
+            case "fwhm" -> "full width at half maximum";
+            case "standard-deviation" -> "standard deviation";
+            case "visible-edge" -> "visible edge";
+            default -> k;
+        };
     }
 }

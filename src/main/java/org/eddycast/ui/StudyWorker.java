@@ -21,6 +21,14 @@ final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
     record Progress(double fraction, double elapsedSeconds, double secondsLeft, SpreadCurves curves) {
     }
 
+    /** What runs a scenario: the engine, or a stand-in in tests. */
+    @FunctionalInterface
+    interface Runner {
+        StudyResult run(Scenario scenario, int threads, org.eddycast.particles.RunListener listener,
+                        Cancellation cancellation);
+    }
+
+    private final Runner runner;
     private final Scenario scenario;
     private final int threads;
     private final Cancellation cancellation = new Cancellation();
@@ -28,6 +36,12 @@ final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
     private final Consumer<StudyWorker> onDone;
 
     StudyWorker(Scenario scenario, int threads, Consumer<Progress> onProgress, Consumer<StudyWorker> onDone) {
+        this(Engine::run, scenario, threads, onProgress, onDone);
+    }
+
+    StudyWorker(Runner runner, Scenario scenario, int threads, Consumer<Progress> onProgress,
+                Consumer<StudyWorker> onDone) {
+        this.runner = runner;
         this.scenario = scenario;
         this.threads = threads;
         this.onProgress = onProgress;
@@ -44,7 +58,7 @@ final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
     protected StudyResult doInBackground() {
         long start = System.nanoTime();
         Scales scales = Engine.dimensionlessCase(scenario).scales();
-        return Engine.run(scenario, threads, (fraction, partial) -> {
+        return runner.run(scenario, threads, (fraction, partial) -> {
             double elapsed = (System.nanoTime() - start) * 1e-9;
             double left = fraction > 0.02 ? elapsed * (1 - fraction) / fraction : Double.NaN;
             publish(new Progress(fraction, elapsed, left, partial == null ? null : SpreadCurves.of(partial, scales)));

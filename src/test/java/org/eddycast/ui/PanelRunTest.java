@@ -22,7 +22,12 @@ import javax.swing.Action;
 import javax.swing.JComponent;
 import javax.swing.RepaintManager;
 import javax.swing.SwingUtilities;
+import com.formdev.flatlaf.FlatDarkLaf;
 import com.formdev.flatlaf.FlatLightLaf;
+import org.eddycast.engine.VerificationCase;
+import org.eddycast.engine.VerificationSuite;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.eddycast.plugin.HostContext;
 import org.eddycast.scenario.ScenarioReader;
 import org.junit.jupiter.api.Test;
@@ -51,9 +56,10 @@ class PanelRunTest {
 
     private final List<String> offThread = new CopyOnWriteArrayList<>();
 
-    @Test
-    void fullRunThroughThePanelsOwnActions() throws Exception {
-        onEdt(FlatLightLaf::setup);
+    @ParameterizedTest
+    @ValueSource(strings = {"light", "dark"})
+    void fullRunThroughThePanelsOwnActions(String theme) throws Exception {
+        onEdt(() -> setTheme(theme));
         RepaintManager.setCurrentManager(new RepaintManager() {
             @Override
             public synchronized void addInvalidComponent(JComponent c) {
@@ -81,13 +87,13 @@ class PanelRunTest {
             holder[0].showScenario(BundledPresets.standard(), BundledPresets.folder(), "mixing-tank-dose.json");
         });
         EddycastPanel panel = holder[0];
-        shot(panel, "1-filled-tank-preset");
+        shot(panel, "filled", theme);
         onEdt(() -> panel.showScenario(ScenarioReader.parse(TINY), tmp, "tiny.json"));
         // set fields as a user would
         onEdt(() -> panel.form().setValue("flow.rmsVelocity", "0.05"));
         onEdt(() -> assertTrue(panel.form().lastCheck().valid(), () -> panel.form().lastCheck().toString()));
-        runAndWait(panel, "2-running");
-        shot(panel, "3-results");
+        runAndWait(panel, null);
+        shot(panel, "results", theme);
         List<List<String>> rows = callEdt(() -> panel.results().tableRows());
         assertEquals("eddy diffusivity along x", rows.get(0).get(0));
         double dx = Double.parseDouble(rows.get(0).get(1));
@@ -95,6 +101,15 @@ class PanelRunTest {
         assertEquals(engineDx, dx, 1e-3 * Math.abs(engineDx), "table shows the engine's value to 4 figures");
         assertEquals(0.05, panel.lastResult().turbulence().rmsVelocity(), 1e-12, "the edited field was used");
         assertTrue(offThread.isEmpty(), () -> "Swing touched off the event thread: " + offThread);
+        // the forecast table shows the forecast's own numbers, the width measure named in the headers
+        List<List<String>> forecastRows = callEdt(() -> panel.results().forecastRows());
+        assertEquals(org.eddycast.report.SummaryContent.forecastTable(panel.lastResult().forecast()).rows(),
+                forecastRows);
+        String reasoning = callEdt(() -> panel.results().reasoningText());
+        for (String a : panel.lastResult().forecast().assumptions()) {
+            assertTrue(reasoning.contains(a), "assumption in plain view: " + a);
+        }
+        assertTrue(reasoning.contains(panel.lastResult().forecast().cautions().get(0)), "caution in plain view");
 
         // keep it, change the flow, run again, keep: comparison
         onEdt(() -> panel.keepAction().actionPerformed(null));
@@ -104,7 +119,7 @@ class PanelRunTest {
         String verdict = callEdt(() -> panel.results().options().verdictText());
         // u' doubled at fixed L and tau: the option with 0.1 m/s must spread faster
         assertTrue(verdict.contains("faster"), verdict);
-        shot(panel, "4-comparison");
+        shot(panel, "comparison", theme);
 
         // an input error: named under its field, the run refuses, nothing crashes
         onEdt(() -> panel.form().setValue("flow.integralLength", "-2"));
@@ -114,29 +129,162 @@ class PanelRunTest {
         onEdt(() -> panel.runAction().actionPerformed(null));
         assertFalse(callEdt(panel::isRunning));
         onEdt(() -> panel.results().tabs().setSelectedIndex(0));
-        shot(panel, "5-input-error");
+        shot(panel, "input-error", theme);
         onEdt(() -> panel.form().setValue("flow.integralLength", "abc"));
         assertTrue(callEdt(() -> panel.form().lastCheck().fieldProblems().get("flow.integralLength"))
                 .contains("not a number"));
+
+        // a channel: the width chart with the handbook curves, and the handbook comparison
+        onEdt(() -> panel.showScenario(ScenarioReader.parse(org.eddycast.sheet.ForecastSheetTest.CHANNEL), tmp,
+                "channel.json"));
+        runAndWait(panel, null);
+        onEdt(() -> panel.results().tabs().setSelectedIndex(0));
+        shot(panel, "channel-width", theme);
+        onEdt(() -> panel.results().tabs().setSelectedIndex(3));
+        shot(panel, "channel-handbook", theme);
+        List<List<String>> handbook = callEdt(() -> panel.results().handbookRows());
+        assertEquals(panel.lastResult().forecast().handbook().size(), handbook.size());
+        assertTrue(handbook.get(1).get(1).startsWith("eps_t = 0.15 h u*"), handbook.get(1).toString());
+        onEdt(() -> panel.results().tabs().setSelectedIndex(2));
+        shot(panel, "channel-forecast-table", theme);
         prefs.removeNode();
+        onEdt(() -> setTheme("light"));
+    }
+
+    private static void setTheme(String theme) {
+        if (theme.equals("dark")) {
+            FlatDarkLaf.setup();
+        } else {
+            FlatLightLaf.setup();
+        }
     }
 
     @Test
-    void cancelFreesThePanelAtOnce() throws Exception {
-        EddycastPanel[] holder = new EddycastPanel[1];
+    void savedScenarioReopensUnchanged() throws Exception {
+        EddycastPanel[] holder = new EddycastPanel[2];
         onEdt(() -> {
             holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test4")));
+            holder[0].showScenario(ScenarioReader.parse(TINY), tmp, "tiny.json");
+            holder[0].form().setValue("flow.rmsVelocity", "0.07");
+        });
+        Path first = tmp.resolve("saved.json");
+        Path second = tmp.resolve("saved-again.json");
+        List<String> before = new java.util.ArrayList<>();
+        onEdt(() -> {
+            assertTrue(holder[0].saveTo(first));
+            holder[1] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test4")));
+            assertTrue(holder[1].open(first));
+            assertTrue(holder[1].saveTo(second));
+            before.add(org.eddycast.scenario.ScenarioWriter.text(holder[0].form().check().scenario()));
+            before.add(org.eddycast.scenario.ScenarioWriter.text(holder[1].form().check().scenario()));
+        });
+        assertEquals(Files.readString(first), Files.readString(second), "saved, reopened and saved again: same file");
+        assertEquals(before.get(0), before.get(1), "the reopened form holds the same scenario");
+        assertTrue(Files.readString(first).contains("0.07"), "the edited value was saved");
+        Preferences.userRoot().node("org/eddycast/ui-test4").removeNode();
+    }
+
+    @Test
+    void aRunsFaultIsReadableHasDetailsAndIsLogged() throws Exception {
+        Path logDir = Path.of("target", "test-log");
+        System.setProperty(ErrorLog.FOLDER_PROPERTY, logDir.toString());
+        try {
+            Files.deleteIfExists(logDir.resolve("eddycast.log"));
+            TestDialogs dialogs = new TestDialogs();
+            EddycastPanel[] holder = new EddycastPanel[1];
+            onEdt(() -> {
+                holder[0] = new EddycastPanel(new TestHost(), dialogs,
+                        new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test5")));
+                holder[0].showScenario(ScenarioReader.parse(TINY), tmp, "tiny.json");
+                holder[0].setRunner((sc, threads, listener, cancel) -> {
+                    throw new IllegalStateException("mode table exhausted");
+                });
+                holder[0].runAction().actionPerformed(null);
+            });
+            long deadline = System.nanoTime() + 10_000_000_000L;
+            while (callEdt(holder[0]::isRunning)) {
+                assertTrue(System.nanoTime() < deadline);
+                Thread.sleep(20);
+            }
+            assertEquals(1, dialogs.faults.size(), dialogs.told.toString());
+            String[] fault = dialogs.faults.get(0);
+            assertTrue(fault[1].contains("internal fault") && fault[1].contains("mode table exhausted"), fault[1]);
+            assertTrue(fault[1].contains("eddycast.log"), "says where the log is: " + fault[1]);
+            assertTrue(fault[2].contains("IllegalStateException") && fault[2].contains("\tat "), "details: stack");
+            String log = Files.readString(logDir.resolve("eddycast.log"));
+            assertTrue(log.contains("mode table exhausted") && log.contains("IllegalStateException"), log);
+            assertEquals("0.04", callEdt(() -> holder[0].form().value("flow.rmsVelocity")), "form kept");
+            assertEquals("Failed", callEdt(holder[0]::progressText));
+            onEdt(() -> assertTrue(holder[0].runAction().isEnabled()));
+        } finally {
+            System.clearProperty(ErrorLog.FOLDER_PROPERTY);
+            Preferences.userRoot().node("org/eddycast/ui-test5").removeNode();
+        }
+    }
+
+    @Test
+    void selfCheckRunsCasesThroughTheDialogsOwnCode() throws Exception {
+        // one built-in case with fewer particles: the uniform Ornstein-Uhlenbeck velocity, D = D0 + u'^2 tau
+        // (Taylor 1921, Diffusion by continuous movements, Proc. London Math. Soc. s2-20:196)
+        VerificationCase full = VerificationSuite.cases().stream()
+                .filter(c -> c.name().startsWith("uniform Ornstein-Uhlenbeck")).findFirst().orElseThrow();
+        VerificationCase small = new VerificationCase(full.name(), full.source(), full.model(), full.axis(),
+                full.expected(), full.biasBound(), full.biasReason(), full.d0(), full.integrator(), full.timeStep(),
+                full.steps(), full.groupSize(), 16384);
+        SelfCheckPanel[] holder = new SelfCheckPanel[1];
+        onEdt(() -> {
+            holder[0] = new SelfCheckPanel(List.of(small), 2);
+            holder[0].start();
+        });
+        long deadline = System.nanoTime() + 30_000_000_000L;
+        while (!callEdt(holder[0]::isDone)) {
+            assertTrue(System.nanoTime() < deadline, "self-check did not finish in 30 s");
+            Thread.sleep(50);
+        }
+        Thread.sleep(100);
+        List<List<String>> rows = callEdt(holder[0]::rows);
+        assertEquals(1, rows.size());
+        assertEquals(full.name(), rows.get(0).get(0));
+        assertEquals(1.25, Double.parseDouble(rows.get(0).get(1)), 1e-9, "D0 + u'^2 tau = 0.25 + 1");
+        // with an eighth of the case's particles the estimate still lies within 3 of its own standard errors of
+        // the exact value (fixed seed VerificationSuite.SEED), but its interval is wider than the case's
+        // precision target, and the table must say so rather than claim the case reproduced
+        assertTrue(Math.abs(Double.parseDouble(rows.get(0).get(3))) < 3, rows.get(0).toString());
+        assertTrue(rows.get(0).get(4).contains("more than 3%"), rows.get(0).toString());
+        assertTrue(callEdt(holder[0]::statusText).startsWith("All 1 cases run"));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"light", "dark"})
+    void cancelFreesThePanelAtOnce(String theme) throws Exception {
+        EddycastPanel[] holder = new EddycastPanel[1];
+        onEdt(() -> {
+            setTheme(theme);
+            holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
                     new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test2")));
-            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 6000")), tmp,
+            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 1000")
+                    .replace("\"particles\": 512", "\"particles\": 4096")), tmp,
                     "long.json");
             holder[0].runAction().actionPerformed(null);
         });
         EddycastPanel panel = holder[0];
         assertTrue(callEdt(panel::isRunning));
+        // wait for the first partial curves (the banner says they fill in), then picture the running state
+        long deadline = System.nanoTime() + 20_000_000_000L;
+        while (!callEdt(() -> panel.results().bannerText()).startsWith("Running:")
+                && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+        shot(panel, "running", theme);
+        assertEquals(ResultsView.SPREAD_TAB, (int) callEdt(() -> panel.results().tabs().getSelectedIndex()),
+                "while running, the curves that fill in are shown");
         onEdt(() -> panel.cancelAction().actionPerformed(null));
         assertFalse(callEdt(panel::isRunning));
         assertEquals("Cancelled", callEdt(panel::progressText));
         onEdt(() -> assertTrue(panel.runAction().isEnabled()));
+        onEdt(() -> setTheme("light"));
     }
 
     @Test
@@ -145,7 +293,15 @@ class PanelRunTest {
         EddycastPanel[] holder = new EddycastPanel[1];
         onEdt(() -> holder[0] = new EddycastPanel(new TestHost(), dialogs,
                 new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test3"))));
-        shot(holder[0], "0-empty");
+        shot(holder[0], "empty", "light");
+        EddycastPanel[] dark = new EddycastPanel[1];
+        onEdt(() -> {
+            FlatDarkLaf.setup();
+            dark[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test3")));
+        });
+        shot(dark[0], "empty", "dark");
+        onEdt(FlatLightLaf::setup);
         Path broken = tmp.resolve("broken.json");
         Files.writeString(broken, "{ \"version\": 1, \"flow\": ");
         onEdt(() -> holder[0].showScenario(ScenarioReader.parse(TINY), tmp, "tiny.json"));
@@ -168,6 +324,11 @@ class PanelRunTest {
         assertNotNull(panel.lastResult(), () -> "no result: " + callEdtQuiet(panel::progressText));
     }
 
+    static void shot(EddycastPanel panel, String state, String theme) throws Exception {
+        shot(panel, state + "-" + theme);
+    }
+
+    /** Renders the panel at 1280 x 820 into target/screenshots/panel-NAME.png. */
     static void shot(EddycastPanel panel, String name) throws Exception {
         onEdt(() -> {
             JComponent c = panel.component();
@@ -180,7 +341,7 @@ class PanelRunTest {
             try {
                 Path dir = Path.of("target", "screenshots");
                 Files.createDirectories(dir);
-                ImageIO.write(img, "png", dir.resolve(name + ".png").toFile());
+                ImageIO.write(img, "png", dir.resolve("panel-" + name + ".png").toFile());
             } catch (java.io.IOException e) {
                 throw new java.io.UncheckedIOException(e);
             }
@@ -234,9 +395,16 @@ class PanelRunTest {
             return Answer.DISCARD;
         }
 
+        final List<String[]> faults = new CopyOnWriteArrayList<>();
+
         @Override
         public void tell(String title, String message) {
             told.add(title + ": " + message);
+        }
+
+        @Override
+        public void fault(String title, String message, String details) {
+            faults.add(new String[] {title, message, details});
         }
     }
 
