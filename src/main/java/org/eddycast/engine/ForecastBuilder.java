@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.eddycast.forecast.AxisDensity;
+import org.eddycast.forecast.BoundedSpread;
 import org.eddycast.forecast.Cautions;
 import org.eddycast.forecast.ChannelHandbook;
 import org.eddycast.forecast.ChannelMixingDistance;
@@ -36,7 +37,8 @@ import org.eddycast.stats.AxisEstimate;
  * time T, so that sigma^2 / (2 t) tends to D. The 95% band carries the curve's standard error and then D's
  * interval. Concentrations treat the cloud as Gaussian with that variance: free space, or walls by the cosine
  * series (Crank 1975, The Mathematics of Diffusion, Oxford), using D_eff(t) = sigma^2(t) / (2 t) so the
- * series has exactly the simulated variance before the walls are felt.
+ * series has exactly the simulated variance before the walls are felt. Widths along an axis with walls are those
+ * of the cloud between them ({@link BoundedSpread}).
  */
 public final class ForecastBuilder {
 
@@ -78,6 +80,9 @@ public final class ForecastBuilder {
         AxisDensityFactory density;
         Release release = s.release();
         ChannelPlume plume = null;
+        // Walls per axis: the container's length (NaN for a free axis) and where the release sits on it.
+        double[] wallLength = {Double.NaN, Double.NaN, Double.NaN};
+        double[] wallRelease = new double[3];
         if (s.flow() instanceof TankFlow t) {
             TankDesign tank = t.design();
             double side = tank.tankDiameter() * Math.sqrt(Math.PI) / 2;
@@ -97,6 +102,12 @@ public final class ForecastBuilder {
                     + "%.3g m of the same cross-section area", side, side, size[2]));
             double[] position = at;
             density = (axis, dEff) -> new TwoWallCosineAxis(0, size[axis], position[axis], dEff);
+            for (int a = 0; a < 3; a++) {
+                wallLength[a] = size[a];
+                wallRelease[a] = position[a];
+            }
+            assumptions.add("widths are those of the cloud between the tank's walls: they level off at the width "
+                    + "of a cloud spread evenly over the tank");
             if (Double.isNaN(horizon)) {
                 horizon = 2 * slow;
             }
@@ -131,6 +142,12 @@ public final class ForecastBuilder {
             assumptions.add("x = U t: the cloud's centre moves with the mean velocity " + fmt(u) + " m/s");
             assumptions.add("bed and surface (and banks) reflect the tracer");
             double y0 = fromBank;
+            wallLength[1] = ch.width();
+            wallRelease[1] = y0;
+            wallLength[2] = ch.depth();
+            wallRelease[2] = ch.depth();
+            assumptions.add("lateral and vertical widths are those of the cloud between banks, bed and surface: they "
+                    + "level off once it is mixed across the section");
             double[] lower = {0, 0, 0};
             double[] upper = {Double.NaN, ch.width(), ch.depth()};
             double[] at = {0, y0, ch.depth()};
@@ -173,9 +190,10 @@ public final class ForecastBuilder {
             double t = times[j];
             AxisDensity[] dens = new AxisDensity[3];
             for (int a = 0; a < 3; a++) {
-                width[a][j] = factor * Math.sqrt(variance[a][j]);
-                widthLow[a][j] = factor * Math.sqrt(Math.max(varianceLow[a][j], 0));
-                widthHigh[a][j] = factor * Math.sqrt(varianceHigh[a][j]);
+                width[a][j] = factor * Math.sqrt(bounded(wallLength[a], wallRelease[a], variance[a][j]));
+                widthLow[a][j] = factor * Math.sqrt(bounded(wallLength[a], wallRelease[a],
+                        Math.max(varianceLow[a][j], 0)));
+                widthHigh[a][j] = factor * Math.sqrt(bounded(wallLength[a], wallRelease[a], varianceHigh[a][j]));
                 dens[a] = density.at(a, Math.max(variance[a][j] / (2 * t), 1e-30));
             }
             peak[j] = new InstantaneousRelease(release.mass(), dens[0], dens[1], dens[2]).peakConcentration(t);
@@ -192,6 +210,11 @@ public final class ForecastBuilder {
         }
         return new Forecast(inDistance, grid, times, measure, settings.edgeFraction(), width, widthLow, widthHigh,
                 r.duration(), peak, mixing, handbook, assumptions, Cautions.ALL, plumePeak);
+    }
+
+    /** The variance of a cloud between walls (BoundedSpread), or the free variance on a free axis. */
+    private static double bounded(double length, double release, double freeVariance) {
+        return Double.isNaN(length) ? freeVariance : BoundedSpread.variance(length, release, freeVariance);
     }
 
     /** An axis density for a diffusivity that reproduces the variance at the time asked. */

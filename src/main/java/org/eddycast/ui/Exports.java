@@ -90,7 +90,7 @@ final class Exports {
     Action curvesCsv() {
         return EddycastPanel.action("Export curves (CSV)\u2026", KeyEvent.VK_U, null, () -> withResult(r ->
                 host.chooseFileToSave("Curves as CSV", "csv", null).ifPresent(p -> guarded(p,
-                        () -> AtomicFiles.writeString(p, CurveCsv.text(r.diffusivity()))))));
+                        () -> AtomicFiles.writeString(p, CurveCsv.text(r))))));
     }
 
     /** The charts stacked in one PNG, 900 by 420 pixels each. */

@@ -82,6 +82,13 @@ class ForecastBuilderTest {
         double side = 2.0 * Math.sqrt(Math.PI) / 2;
         double mixed = 0.5 / (side * side * 2.0);
         assertEquals(mixed, peak[peak.length - 1], 0.06 * mixed, "peak at twice the blend time is near mixed");
+        // Widths level off at those of a cloud spread evenly over the box: sigma = L / sqrt(12) per axis.
+        int last = f.times().length - 1;
+        double[] size = {side, side, 2.0};
+        for (int a = 0; a < 3; a++) {
+            double uniform = f.widthFactor() * size[a] / Math.sqrt(12);
+            assertEquals(uniform, f.width()[a][last], 0.01 * uniform, "axis " + a + " width once mixed");
+        }
     }
 
     @Test
