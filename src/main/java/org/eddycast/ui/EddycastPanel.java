@@ -116,7 +116,38 @@ public final class EddycastPanel implements ToolPanel {
         Action check = action("Self-check\u2026", KeyEvent.VK_H, null, this::selfCheck);
         host.contributeMenu("&Run", java.util.Arrays.asList(runAction, cancelAction, null, keepAction,
                 clearOptionsAction, null, check));
+        Action manual = action("Manual", KeyEvent.VK_M, KeyStroke.getKeyStroke(KeyEvent.VK_F1, 0), this::openManual);
+        Action about = action("About eddycast", KeyEvent.VK_A, null, this::about);
+        host.contributeMenu("&Help", java.util.Arrays.asList(manual, about));
         bindKeys(open, saveAs);
+    }
+
+    /** Opens the rendered manual in the system's browser, or says where it is and how to build it. */
+    private void openManual() {
+        java.util.Optional<java.nio.file.Path> file = ManualLocator.find();
+        if (file.isPresent() && java.awt.Desktop.isDesktopSupported()
+                && java.awt.Desktop.getDesktop().isSupported(java.awt.Desktop.Action.BROWSE)) {
+            try {
+                java.awt.Desktop.getDesktop().browse(file.get().toUri());
+                host.showStatus("Manual opened: " + file.get());
+                return;
+            } catch (java.io.IOException | RuntimeException e) {
+                dialogs.tell("Manual", "The manual is at " + file.get() + " but no browser could open it ("
+                        + e.getMessage() + "). Open the file in a web browser.");
+                return;
+            }
+        }
+        dialogs.tell("Manual", file.map(p -> "The manual is at " + p + ". Open it in a web browser.")
+                .orElse("The manual has not been built here. Build it with 'mvn -B verify' in the project "
+                        + "folder; it is written to target/manual/" + ManualLocator.FILE + ". Looked in: "
+                        + ManualLocator.candidates()));
+    }
+
+    private void about() {
+        dialogs.tell("About eddycast", "eddycast " + org.eddycast.engine.ToolVersion.get() + "\n\n"
+                + "Screening forecasts of tracer spreading in turbulent tanks and channels from eddy "
+                + "diffusivities computed by particle simulation.\n\n"
+                + String.join("\n", org.eddycast.forecast.Cautions.ALL));
     }
 
     @Override
