@@ -264,7 +264,7 @@ class PanelRunTest {
             setTheme(theme);
             holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
                     new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test2")));
-            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 1000")
+            holder[0].showScenario(ScenarioReader.parse(TINY.replace("\"duration\": 60", "\"duration\": 100000")
                     .replace("\"particles\": 512", "\"particles\": 4096")), tmp,
                     "long.json");
             holder[0].runAction().actionPerformed(null);
