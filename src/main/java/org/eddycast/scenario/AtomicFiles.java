@@ -51,6 +51,7 @@ public final class AtomicFiles {
         }
         boolean moved = false;
         try {
+            keepPermissions(absolute, temporary);
             try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
                     StandardOpenOption.TRUNCATE_EXISTING);
                  OutputStream out = Channels.newOutputStream(channel)) {
@@ -100,5 +101,20 @@ public final class AtomicFiles {
         String previous = Files.exists(target) ? "; the previous " + target.getFileName() + " is unchanged" : "";
         return new IOException("could not save " + target + ": " + advice + previous
                 + (reason == null ? "" : " [" + reason + "]"), e);
+    }
+
+    /**
+     * A temporary file is created readable by its owner only; the file it replaces keeps its permissions, and a
+     * new file gets the usual rw-r--r-- (where the file system has POSIX permissions).
+     */
+    private static void keepPermissions(Path target, Path temporary) {
+        try {
+            java.util.Set<java.nio.file.attribute.PosixFilePermission> permissions = Files.exists(target)
+                    ? Files.getPosixFilePermissions(target)
+                    : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+            Files.setPosixFilePermissions(temporary, permissions);
+        } catch (UnsupportedOperationException | IOException e) {
+            // not a POSIX file system, or not ours to change: the file system's defaults stay
+        }
     }
 }
