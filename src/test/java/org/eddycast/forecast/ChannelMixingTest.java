@@ -1,5 +1,6 @@
 package org.eddycast.forecast;
 
+import org.eddycast.docs.ValidationLog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
@@ -18,6 +19,9 @@ class ChannelMixingTest {
         // constant is quoted to one figure, so we allow 10%: enough for that rounding, tight enough that a
         // misremembered 0.05 or 0.2 would fail.
         double distance = ChannelMixingDistance.acrossWidth(U, W, EPS_T, W / 2);
+        ValidationLog.exact("distance to mixed across a channel, centre-line release, L eps_t / (U W^2)",
+                "Fischer et al. 1979, Mixing in Inland and Coastal Waters, ch. 5 (from memory)", 0.1,
+                distance * EPS_T / (U * W * W), 0.1 * 0.1, "within 10%: the constant is quoted to one figure");
         assertEquals(0.1, distance * EPS_T / (U * W * W), 0.1 * 0.1);
     }
 
@@ -25,6 +29,9 @@ class ChannelMixingTest {
     void bankReleaseMixesInAboutPoint4UW2OverEps() {
         // Fischer et al. 1979, ch. 5 (from memory): L = 0.4 U W^2 / eps_t for a bank release; 10% as above.
         double distance = ChannelMixingDistance.acrossWidth(U, W, EPS_T, 0.0);
+        ValidationLog.exact("distance to mixed across a channel, bank release, L eps_t / (U W^2)",
+                "Fischer et al. 1979, Mixing in Inland and Coastal Waters, ch. 5 (from memory)", 0.4,
+                distance * EPS_T / (U * W * W), 0.1 * 0.4, "within 10%: the constant is quoted to one figure");
         assertEquals(0.4, distance * EPS_T / (U * W * W), 0.1 * 0.4);
     }
 

@@ -1,5 +1,6 @@
 package org.eddycast.forecast;
 
+import org.eddycast.docs.ValidationLog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -68,6 +69,9 @@ class HandbookTest {
         // gives theta_95 = 9.123 s. Re = N D^2 / nu = 3 * (1/3)^2 / 1.0034e-6 = 3.32e5, Re Po^(1/3) = 5.7e5,
         // well inside the turbulent range: no warning.
         HandbookEstimate theta = TankBlendCorrelation.blendTime(3.0, 5.0, 1.0, 1.0 / 3.0, 1.0, 1.0034e-6, true, 1);
+        ValidationLog.exact("95% blend time correlation, N theta_95 at T/D = 3, Po = 5",
+                "Grenville 1992; Grenville & Nienow 2004, Handbook of Industrial Mixing, ch. 9 (from memory)", 27.369,
+                3.0 * theta.value(), 1e-3, "worked value 5.20 Po^(-1/3) (T/D)^2 to 1e-3");
         assertEquals(27.369, 3.0 * theta.value(), 1e-3);
         assertTrue(theta.withinValidity(), theta.warnings().toString());
         assertEquals(MixingProcess.TANK_BLEND_TIME, theta.process());

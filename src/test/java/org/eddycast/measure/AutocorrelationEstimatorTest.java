@@ -1,5 +1,6 @@
 package org.eddycast.measure;
 
+import org.eddycast.docs.ValidationLog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -113,6 +114,10 @@ class AutocorrelationEstimatorTest {
         double sdT = Math.sqrt(sumT2 / records - meanT * meanT);
         double seMeanT = sdT / Math.sqrt(records);
         assertTrue(3 * seMeanT < 0.10 * t, "ensemble large enough for a 10% check: 3 SE = " + 3 * seMeanT);
+        ValidationLog.statistical("integral time of an Ornstein-Uhlenbeck record, mean of " + records
+                        + " records of 200 T (s)", "exact exp(-t/T) correlation (Uhlenbeck & Ornstein 1930, Phys. Rev. "
+                        + "36:823)", t, meanT, meanT - 1.96 * seMeanT, meanT + 1.96 * seMeanT, 0.9 * t, 1.1 * t,
+                "within 10% (3 standard errors of the ensemble mean are below that)", Math.abs(meanT - t) <= 0.1 * t);
         assertEquals(t, meanT, 0.10 * t, "mean integral time over " + records + " records of 200 T");
 
         // R(T) = exp(-1); the biased estimator about the sample mean is low by about (T/Tr) e^-1 + 2 T/Tr

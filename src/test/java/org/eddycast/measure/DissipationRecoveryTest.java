@@ -1,5 +1,6 @@
 package org.eddycast.measure;
 
+import org.eddycast.docs.ValidationLog;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -52,6 +53,12 @@ class DissipationRecoveryTest {
         assertTrue(fit.lowFrequency() >= LOW && fit.highFrequency() <= FS / 4, fit.describe());
         double se = 1.5 * WelchSpectrumEstimatorTest.relativeStandardError(a.spectrum().segmentCount(), fit.points());
         assertTrue(3 * se < 0.15, "3 SE = " + 3 * se + " is within the 15% asked for");
+        double eps = a.scales().dissipationRate();
+        ValidationLog.statistical("dissipation rate from a record with an imposed -5/3 spectrum (W/kg)",
+                "Kolmogorov 1941 law with C1 = 0.53 (Sreenivasan 1995, Phys. Fluids 7:2778); Welch 1967 spectrum",
+                EPS, eps, eps * (1 - 1.96 * se), eps * (1 + 1.96 * se), EPS * (1 - 3 * se), EPS * (1 + 3 * se),
+                "3 standard errors of the Welch estimate over the fitted band",
+                Math.abs(eps - EPS) <= 3 * se * EPS);
         assertEquals(EPS, a.scales().dissipationRate(), 3 * se * EPS);
         assertEquals(-5.0 / 3.0, fit.slope(), 3 * Math.sqrt(1.944) * fit.slopeStandardError());
 
