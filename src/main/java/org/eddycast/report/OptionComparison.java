@@ -54,7 +54,20 @@ public record OptionComparison(List<String> names, List<String> axes, List<List<
             differs.add(d);
             if (o > 0) {
                 verdict.append(mixingSentence(names.get(o), names.get(0), options.get(o), options.get(0)));
-                if (anyDiff) {
+                boolean shared = options.get(o).diffusivity().fromCache();
+                if (shared && Math.abs(meanRatio - 1) > 1e-9) {
+                    verdict.append(String.format(Locale.ROOT, "\"%s\" spreads the tracer %s than \"%s\": its eddy "
+                                    + "diffusivity is %.2f times as large. Both come from one simulation (the same "
+                                    + "dimensionless case) scaled to each option's units, so the ratio carries no "
+                                    + "sampling error. ", names.get(o), meanRatio > 1 ? "faster" : "slower",
+                            names.get(0), meanRatio));
+                } else if (shared) {
+                    verdict.append(String.format(Locale.ROOT, "\"%s\" and \"%s\" share one simulation (the same "
+                                    + "dimensionless case): their eddy diffusivities differ only by the units "
+                                    + "(ratio %.2f), so any difference between them comes from the geometry or the "
+                                    + "release, as the mixing figures show. ", names.get(o), names.get(0),
+                            meanRatio));
+                } else if (anyDiff) {
                     verdict.append(String.format(Locale.ROOT, "\"%s\" spreads the tracer %s than \"%s\": on average"
                                     + " %.2f times its eddy diffusivity, a difference the 95%% intervals resolve. ",
                             names.get(o), meanRatio > 1 ? "faster" : "slower", names.get(0), meanRatio));
@@ -79,8 +92,15 @@ public record OptionComparison(List<String> names, List<String> axes, List<List<
         }
         Forecast.MixingFigure a = fo.mixing().get(0);
         Forecast.MixingFigure b = fr.mixing().get(0);
-        return String.format(Locale.ROOT, "%s: %.4g %s for \"%s\" against %.4g %s for \"%s\". ", capitalized(a.name()),
-                a.value(), a.unit(), name, b.value(), b.unit(), reference);
+        boolean overlap = a.low() <= b.high() && b.low() <= a.high();
+        boolean distance = "m".equals(a.unit());
+        String which = a.value() < b.value() ? (distance ? "nearer the source" : "sooner")
+                : (distance ? "farther downstream" : "later");
+        double factor = a.value() < b.value() ? b.value() / a.value() : a.value() / b.value();
+        return String.format(Locale.ROOT, "%s: %.4g %s [%.4g, %.4g] for \"%s\" against %.4g %s [%.4g, %.4g] for "
+                        + "\"%s\"; \"%s\" is mixed %.2f times %s, and the intervals %s. ", capitalized(a.name()),
+                a.value(), a.unit(), a.low(), a.high(), name, b.value(), b.unit(), b.low(), b.high(), reference, name,
+                factor, which, overlap ? "overlap" : "do not overlap");
     }
 
     private static String capitalized(String s) {

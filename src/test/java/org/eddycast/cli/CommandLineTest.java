@@ -79,4 +79,33 @@ class CommandLineTest {
         assertEquals(2, bad.status());
         assertTrue(bad.err().contains("line "), bad.err());
     }
+
+    /** run --pdf and compare --pdf write sheets whose text carries the results, the verdict and the cautions. */
+    @Test
+    void runAndCompareWriteTheirSheets(@TempDir Path dir) throws Exception {
+        String base = Files.readString(Path.of("presets/option-ditch-centre-line.json"))
+                .replaceAll("\"particles\": \\d+", "\"particles\": 1024");
+        Path a = Files.writeString(dir.resolve("a.json"), base);
+        Path b = Files.writeString(dir.resolve("b.json"), Files.readString(Path.of("presets/option-ditch-bank.json"))
+                .replaceAll("\"particles\": \\d+", "\"particles\": 1024"));
+        Path sheet = dir.resolve("run.pdf");
+        Outcome o = run("run", a.toString(), "--pdf", sheet.toString());
+        assertEquals(0, o.status(), o.err());
+        String runText = pdfText(sheet);
+        assertTrue(runText.contains("eddy diffusivity along y"), runText);
+        assertTrue(runText.contains("licensed professionals"), "cautions on the sheet");
+        Path comparison = dir.resolve("compare.pdf");
+        Outcome c = run("compare", a.toString(), b.toString(), "--pdf", comparison.toString());
+        assertEquals(0, c.status(), c.err());
+        String compareText = pdfText(comparison);
+        assertTrue(compareText.contains("centre-line") || compareText.contains("Centre-line")
+                || compareText.contains("centre line"), compareText);
+        assertTrue(compareText.contains("licensed professionals"), "cautions on the comparison sheet");
+    }
+
+    private static String pdfText(Path pdf) throws Exception {
+        try (org.apache.pdfbox.pdmodel.PDDocument d = org.apache.pdfbox.Loader.loadPDF(pdf.toFile())) {
+            return new org.apache.pdfbox.text.PDFTextStripper().getText(d).replaceAll("\\s+", " ");
+        }
+    }
 }
