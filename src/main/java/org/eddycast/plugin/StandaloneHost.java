@@ -78,6 +78,7 @@ public final class StandaloneHost implements HostContext {
         });
         exit.setMnemonic(KeyEvent.VK_X);
         menus.add(viewMenu());
+        keepHelpLast();
         frame.setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);
         frame.addWindowListener(new WindowAdapter() {
             @Override
@@ -137,6 +138,18 @@ public final class StandaloneHost implements HostContext {
             host.frame.setLocationRelativeTo(null);
             host.frame.setVisible(true);
         });
+    }
+
+    /** By convention the Help menu stands last, whatever order the tool contributed its menus in. */
+    private void keepHelpLast() {
+        for (int i = 0; i < menus.getMenuCount(); i++) {
+            JMenu m = menus.getMenu(i);
+            if (m != null && "Help".equals(m.getText())) {
+                menus.remove(m);
+                menus.add(m);
+                return;
+            }
+        }
     }
 
     private JMenu viewMenu() {
