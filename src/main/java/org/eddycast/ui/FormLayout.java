@@ -50,8 +50,8 @@ public final class FormLayout {
                     FieldSpec.text("substance.name", null, true),
                     FieldSpec.number("substance.molecularDiffusivity", "m\u00b2/s", null, false),
                     FieldSpec.number("release.mass", "kg", null, true),
-                    FieldSpec.number("release.rate", "kg/s", null, true),
-                    FieldSpec.choice("release.location", null, List.of("centre-line", "bank")))),
+                    FieldSpec.number("release.rate", "kg/s", "channel", true),
+                    FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")))),
             new Section("section.forecast", List.of(
                     FieldSpec.number("forecast.horizon", "s", null, true),
                     // the scenario file's default (full width at half maximum) first, so an empty form shows it
