@@ -25,6 +25,21 @@ public class ScalarShearKernel implements ShearKernel {
 
     @Override
     public void shear(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n) {
+        apply(f, m, h, x, y, z, n, x, y, z);
+    }
+
+    @Override
+    public void addVelocity(ShearModeField f, int m, double[] x, double[] y, double[] z, int n,
+                            double[] vx, double[] vy, double[] vz) {
+        apply(f, m, 1.0, x, y, z, n, vx, vy, vz);
+    }
+
+    /**
+     * Adds h times mode m's velocity at (x, y, z) to (ox, oy, oz): the shear when the output is the position
+     * itself (every phase is taken before any point moves), the velocity sum when h = 1.
+     */
+    private void apply(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n,
+                       double[] ox, double[] oy, double[] oz) {
         ensure(n);
         double k1 = f.kx[m];
         double k2 = f.ky[m];
@@ -40,57 +55,26 @@ public class ScalarShearKernel implements ShearKernel {
         double hby = h * f.by[m];
         double hbz = h * f.bz[m];
         for (int i = 0; i < n; i++) {
-            x[i] += hax * cos[i] + hbx * sin[i];
-            y[i] += hay * cos[i] + hby * sin[i];
-            z[i] += haz * cos[i] + hbz * sin[i];
-        }
-    }
-
-    @Override
-    public void addVelocity(ShearModeField f, int m, double[] x, double[] y, double[] z, int n,
-                            double[] vx, double[] vy, double[] vz) {
-        ensure(n);
-        double k1 = f.kx[m];
-        double k2 = f.ky[m];
-        double k3 = f.kz[m];
-        for (int i = 0; i < n; i++) {
-            phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
-        }
-        sinCos(phase, sin, cos, n);
-        double a1 = f.ax[m];
-        double a2 = f.ay[m];
-        double a3 = f.az[m];
-        double b1 = f.bx[m];
-        double b2 = f.by[m];
-        double b3 = f.bz[m];
-        for (int i = 0; i < n; i++) {
-            vx[i] += a1 * cos[i] + b1 * sin[i];
-            vy[i] += a2 * cos[i] + b2 * sin[i];
-            vz[i] += a3 * cos[i] + b3 * sin[i];
+            ox[i] += hax * cos[i] + hbx * sin[i];
+            oy[i] += hay * cos[i] + hby * sin[i];
+            oz[i] += haz * cos[i] + hbz * sin[i];
         }
     }
 
     @Override
     public void shear(ModeLanes f, int m, double h, double[] x, double[] y, double[] z) {
-        int n = f.width();
-        ensure(n);
-        int o = m * ModeLanes.FIELDS * n;
-        for (int i = 0; i < n; i++) {
-            int j = o + i;
-            phase[i] = f.data[j + ModeLanes.KX * n] * x[i] + f.data[j + ModeLanes.KY * n] * y[i]
-                    + f.data[j + ModeLanes.KZ * n] * z[i];
-        }
-        sinCos(phase, sin, cos, n);
-        for (int i = 0; i < n; i++) {
-            x[i] += h * (f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i]);
-            y[i] += h * (f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i]);
-            z[i] += h * (f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i]);
-        }
+        apply(f, m, h, x, y, z, x, y, z);
     }
 
     @Override
     public void addVelocity(ModeLanes f, int m, double[] x, double[] y, double[] z,
                             double[] vx, double[] vy, double[] vz) {
+        apply(f, m, 1.0, x, y, z, vx, vy, vz);
+    }
+
+    /** The same for one realization per lane (mode parameters laid out [mode][quantity][lane]). */
+    private void apply(ModeLanes f, int m, double h, double[] x, double[] y, double[] z,
+                       double[] ox, double[] oy, double[] oz) {
         int n = f.width();
         ensure(n);
         int o = m * ModeLanes.FIELDS * n;
@@ -101,9 +85,9 @@ public class ScalarShearKernel implements ShearKernel {
         }
         sinCos(phase, sin, cos, n);
         for (int i = 0; i < n; i++) {
-            vx[i] += f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i];
-            vy[i] += f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i];
-            vz[i] += f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i];
+            ox[i] += h * (f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i]);
+            oy[i] += h * (f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i]);
+            oz[i] += h * (f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i]);
         }
     }
 
