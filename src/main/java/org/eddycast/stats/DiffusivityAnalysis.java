@@ -26,6 +26,8 @@ public final class DiffusivityAnalysis {
 
     static final double MIN_WINDOW_START_IN_TL = 5;
     static final int MIN_BLOCKS = 20;
+    /** The run length advised when a run is short or unsettled, in Lagrangian time scales. */
+    static final double RECOMMENDED_RUN_IN_TL = 20;
 
     private final List<AxisEstimate> axes;
     private final List<String> warnings;
@@ -65,7 +67,7 @@ public final class DiffusivityAnalysis {
                                 + "[T/2, T] %.4g (a change of %.1f%%, beyond three standard errors). Run at least "
                                 + "%.4g s.", axisName(a), early.value(), late.value(),
                         100 * (late.value() - early.value()) / late.value(),
-                        timeUnit * Math.max(2 * end, 20 * Math.max(tl, 0))));
+                        timeUnit * Math.max(2 * end, RECOMMENDED_RUN_IN_TL * Math.max(tl, 0))));
             }
         }
         if (longestTl > 0 && end / 2 < MIN_WINDOW_START_IN_TL * longestTl) {
@@ -73,7 +75,7 @@ public final class DiffusivityAnalysis {
                     "the run is short: the late window starts at %.4g s, less than %.0f Lagrangian time scales "
                             + "(T_L = %.4g s), so the early ballistic growth may still bias the slope. Run at least "
                             + "%.4g s.", timeUnit * end / 2, MIN_WINDOW_START_IN_TL, timeUnit * longestTl,
-                    timeUnit * 2 * MIN_WINDOW_START_IN_TL * longestTl * 2));
+                    timeUnit * RECOMMENDED_RUN_IN_TL * longestTl));
         }
         if (m.count() < MIN_BLOCKS) {
             warnings.add(String.format(Locale.ROOT,

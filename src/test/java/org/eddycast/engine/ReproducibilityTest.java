@@ -78,6 +78,13 @@ class ReproducibilityTest {
         canceller.join();
         // A run of this size takes hours; stopping within a few seconds shows the flag is seen every step.
         assertTrue(seconds < 5, "cancel took " + seconds + " s");
+        // The pool has terminated when the run returns; a worker thread may still be leaving its run method for
+        // a moment after that, so each is given up to a second to end before it counts as left running.
+        for (Thread t : Thread.getAllStackTraces().keySet()) {
+            if (t.getName().startsWith("ForkJoinPool-")) {
+                t.join(1000);
+            }
+        }
         long workers = Thread.getAllStackTraces().keySet().stream()
                 .filter(t -> t.getName().startsWith("ForkJoinPool-") && t.isAlive()).count();
         assertEquals(0, workers, "worker threads left running after cancel");
