@@ -3,49 +3,65 @@ package org.eddycast.field;
 import java.math.BigDecimal;
 
 /**
- * Sine and cosine of many phases at once, for the particle kernel.
+ * Sine and cosine for the particle kernels, in plain scalar code; {@link VectorSinCos} is the same method in
+ * vector lanes.
  *
- * <p>Method: Cody-Waite range reduction by pi/2 with a two-part constant (Cody and Waite 1980, Software
- * Manual for the Elementary Functions, Prentice-Hall, ch. 8), then the Taylor polynomials of sine (to degree
- * 15) and cosine (to degree 16) on the reduced interval [-pi/4, pi/4], where the first omitted terms are below
- * 5e-17, and a quadrant swap. The whole is branch-free apart from the loop so the compiler can keep it in
- * registers.
+ * <p>Method: the nearest whole number q of turns, q = rint(phase / 2 pi); Cody-Waite reduction of the half
+ * angle, h = phase / 2 - q pi, with a two-part constant (Cody and Waite 1980, Software Manual for the
+ * Elementary Functions, Prentice-Hall, ch. 8), so that h lies in [-pi/2, pi/2]; on that interval
+ * sin h = h P(h^2) and cos h = Q(h^2) with P of degree 6 and Q of degree 7, near-minimax polynomials found by
+ * Chebyshev interpolation of sin(h)/h and cos(h) in h^2 (Trefethen 2013, Approximation Theory and
+ * Approximation Practice, SIAM); then the double-angle formulas sin(phase) = 2 sin h cos h and
+ * cos(phase) = 2 cos^2 h - 1. Unlike a reduction by quarter turns this needs no quadrant logic, so the vector
+ * form is floating-point arithmetic only.
  *
- * <p>Accuracy: within 2e-15 absolute of {@link Math#sin} and {@link Math#cos} for |phase| up to 1e6 (tested);
- * the reduction loses accuracy beyond about 2^20 pi/2, far beyond the phases the engine produces.
+ * <p>Accuracy: within 2e-13 absolute of {@link Math#sin} and {@link Math#cos} for |phase| up to 1e6 (the
+ * polynomials' own error is below 8e-14 for sin h and 8e-15 for cos h; tested); the reduction loses accuracy
+ * beyond about 2^20 pi, far beyond the phases the engine produces.
  */
 public final class FastSinCos {
 
-    /** pi/2 rounded to 33 significant bits, so that q * PIO2_HI is exact for |q| below 2^20. */
-    static final double PIO2_HI;
-    /** pi/2 - PIO2_HI, rounded to double. */
-    static final double PIO2_LO;
-    private static final double TWO_OVER_PI = 2.0 / Math.PI;
+    /** pi rounded to 33 significant bits, so that q * PI_HI is exact for |q| below 2^20. */
+    static final double PI_HI;
+    /** pi - PI_HI, rounded to double. */
+    static final double PI_LO;
+    static final double ONE_OVER_TWO_PI = 0.5 / Math.PI;
 
     static {
-        BigDecimal halfPi = new BigDecimal(
-                "1.57079632679489661923132169163975144209858469968755291048747229615390820314310449931401741267");
-        long bits = Double.doubleToLongBits(halfPi.doubleValue());
-        PIO2_HI = Double.longBitsToDouble(bits & 0xFFFFFFFFF8000000L);
-        PIO2_LO = halfPi.subtract(new BigDecimal(PIO2_HI)).doubleValue();
+        BigDecimal pi = new BigDecimal(
+                "3.14159265358979323846264338327950288419716939937510582097494459230781640628620899862803482534");
+        long bits = Double.doubleToLongBits(pi.doubleValue());
+        PI_HI = Double.longBitsToDouble(bits & 0xFFFFFFFFF8000000L);
+        PI_LO = pi.subtract(new BigDecimal(PI_HI)).doubleValue();
     }
 
-    // Taylor coefficients (-1)^n / (2n+1)! and (-1)^n / (2n)!.
-    private static final double S3 = -1.0 / 6.0;
-    private static final double S5 = 1.0 / 120.0;
-    private static final double S7 = -1.0 / 5040.0;
-    private static final double S9 = 1.0 / 362880.0;
-    private static final double S11 = -1.0 / 39916800.0;
-    private static final double S13 = 1.0 / 6227020800.0;
-    private static final double S15 = -1.0 / 1307674368000.0;
-    private static final double C2 = -0.5;
-    private static final double C4 = 1.0 / 24.0;
-    private static final double C6 = -1.0 / 720.0;
-    private static final double C8 = 1.0 / 40320.0;
-    private static final double C10 = -1.0 / 3628800.0;
-    private static final double C12 = 1.0 / 479001600.0;
-    private static final double C14 = -1.0 / 87178291200.0;
-    private static final double C16 = 1.0 / 20922789888000.0;
+    /** sin(h) / h on h^2 in [0, (pi/2)^2]: coefficients of h^0, h^2, ..., h^12. */
+    static final double[] SINE = {
+        0.9999999999999496, -0.16666666666466673, 0.00833333332035835, -1.9841266683130672e-4,
+        2.7556952912858047e-6, -2.503026818882279e-8, 1.54112197466489e-10};
+    /**
+     * cos(h) on h^2 in [0, (pi/2)^2]: coefficients of h^0, h^2, ..., h^14, the first held at 1 so that the
+     * cosine of 0 is exactly 1 (error below 8e-15).
+     */
+    static final double[] COSINE = {
+        1.0, -0.49999999999999684, 0.04166666666654123, -0.0013888888880751317, 2.4801585321095498e-5,
+        -2.7557089550661797e-7, 2.0863068045993953e-9, -1.106499051779341e-11};
+
+    private static final double S0 = SINE[0];
+    private static final double S1 = SINE[1];
+    private static final double S2 = SINE[2];
+    private static final double S3 = SINE[3];
+    private static final double S4 = SINE[4];
+    private static final double S5 = SINE[5];
+    private static final double S6 = SINE[6];
+    private static final double C0 = COSINE[0];
+    private static final double C1 = COSINE[1];
+    private static final double C2 = COSINE[2];
+    private static final double C3 = COSINE[3];
+    private static final double C4 = COSINE[4];
+    private static final double C5 = COSINE[5];
+    private static final double C6 = COSINE[6];
+    private static final double C7 = COSINE[7];
 
     private FastSinCos() {
     }
@@ -56,47 +72,50 @@ public final class FastSinCos {
      */
     public static void sinCos(double[] phase, double[] sin, double[] cos, int n) {
         for (int i = 0; i < n; i++) {
-            double p = phase[i];
-            double q = Math.rint(p * TWO_OVER_PI);
-            double r = (p - q * PIO2_HI) - q * PIO2_LO;
-            double r2 = r * r;
-            double s = sinPolynomial(r, r2);
-            double c = cosPolynomial(r2);
-            long quadrant = (long) q;
-            boolean swap = (quadrant & 1L) != 0;
-            double sv = swap ? c : s;
-            double cv = swap ? s : c;
-            sin[i] = (quadrant & 2L) != 0 ? -sv : sv;
-            cos[i] = ((quadrant + 1L) & 2L) != 0 ? -cv : cv;
+            double h = halfAngle(phase[i]);
+            double w = h * h;
+            double s = h * sinePolynomial(w);
+            double c = cosinePolynomial(w);
+            sin[i] = 2 * s * c;
+            cos[i] = Math.fma(2 * c, c, -1.0);
         }
     }
 
     /** Sine of one phase, by the same method. */
     public static double sin(double phase) {
-        double q = Math.rint(phase * TWO_OVER_PI);
-        double r = (phase - q * PIO2_HI) - q * PIO2_LO;
-        double r2 = r * r;
-        long quadrant = (long) q;
-        double v = (quadrant & 1L) != 0 ? cosPolynomial(r2) : sinPolynomial(r, r2);
-        return (quadrant & 2L) != 0 ? -v : v;
+        double h = halfAngle(phase);
+        double w = h * h;
+        return 2 * h * sinePolynomial(w) * cosinePolynomial(w);
     }
 
     /** Cosine of one phase, by the same method. */
     public static double cos(double phase) {
-        double q = Math.rint(phase * TWO_OVER_PI);
-        double r = (phase - q * PIO2_HI) - q * PIO2_LO;
-        double r2 = r * r;
-        long quadrant = (long) q;
-        double v = (quadrant & 1L) != 0 ? sinPolynomial(r, r2) : cosPolynomial(r2);
-        return ((quadrant + 1L) & 2L) != 0 ? -v : v;
+        double h = halfAngle(phase);
+        double c = cosinePolynomial(h * h);
+        return Math.fma(2 * c, c, -1.0);
     }
 
-    private static double sinPolynomial(double r, double r2) {
-        return r + r * r2 * (S3 + r2 * (S5 + r2 * (S7 + r2 * (S9 + r2 * (S11 + r2 * (S13 + r2 * S15))))));
+    /** Sine of an angle already in [-pi/2, pi/2], by the polynomial alone. */
+    public static double sinOfReduced(double h) {
+        return h * sinePolynomial(h * h);
     }
 
-    private static double cosPolynomial(double r2) {
-        return 1.0 + r2 * (C2 + r2 * (C4 + r2 * (C6 + r2 * (C8 + r2 * (C10 + r2 * (C12 + r2 * (C14
-                + r2 * C16)))))));
+    /** Cosine of an angle already in [-pi/2, pi/2], by the polynomial alone. */
+    public static double cosOfReduced(double h) {
+        return cosinePolynomial(h * h);
+    }
+
+    /** phase / 2 - q pi with q the nearest whole number of turns: in [-pi/2, pi/2]. */
+    private static double halfAngle(double phase) {
+        double q = Math.rint(phase * ONE_OVER_TWO_PI);
+        return Math.fma(-q, PI_LO, Math.fma(-q, PI_HI, 0.5 * phase));
+    }
+
+    private static double sinePolynomial(double w) {
+        return S0 + w * (S1 + w * (S2 + w * (S3 + w * (S4 + w * (S5 + w * S6)))));
+    }
+
+    private static double cosinePolynomial(double w) {
+        return C0 + w * (C1 + w * (C2 + w * (C3 + w * (C4 + w * (C5 + w * (C6 + w * C7))))));
     }
 }

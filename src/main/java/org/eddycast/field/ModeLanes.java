@@ -4,7 +4,8 @@ package org.eddycast.field;
  * Many realizations of a sum of shear modes side by side, one per lane, laid out [mode][quantity][lane] so that a
  * vector kernel reads mode m of consecutive lanes from consecutive memory: the layout for particles that each carry
  * their own realization. Amplitudes follow the exact Ornstein-Uhlenbeck transition of {@link ShearModeField}
- * lane by lane.
+ * lane by lane. The amplitudes are stored multiplied by the step scale h, the substep of the scheme that reads
+ * them, so that the kernels need no multiplication by h in their inner loops.
  *
  * <p>A mutable workspace owned by one thread: the kernels read its arrays directly. Memory: 21 doubles per mode
  * and lane (about 690 kB for 64 modes and 64 lanes).
@@ -45,6 +46,7 @@ public final class ModeLanes {
      * would all map to the same few cache sets).
      */
     final double[] data;
+    private double stepScale = 1.0;
 
     /**
      * @param dimensions 2 or 3
@@ -81,17 +83,40 @@ public final class ModeLanes {
         }
         for (int m = 0; m < modes; m++) {
             field.copyMode(m, data, m * FIELDS * width + lane, width);
+            refresh(m * FIELDS * width + lane);
         }
     }
 
-    /** Mode m's current amplitudes in the lane, copied into a and b (length 3). */
-    public void amplitudes(int lane, int m, double[] a, double[] b) {
-        int j = m * FIELDS * width + lane;
-        a[0] = data[j + AX * width];
-        a[1] = data[j + AY * width];
-        a[2] = data[j + AZ * width];
-        b[0] = data[j + BX * width];
-        b[1] = data[j + BY * width];
-        b[2] = data[j + BZ * width];
+    /** The factor h the stored amplitudes carry. */
+    public double stepScale() {
+        return stepScale;
+    }
+
+    /** Stores every amplitude multiplied by h from now on (recomputed from the coefficients when h changes). */
+    public void setStepScale(double h) {
+        if (h == stepScale) {
+            return;
+        }
+        stepScale = h;
+        for (int m = 0; m < modes; m++) {
+            for (int lane = 0; lane < width; lane++) {
+                refresh(m * FIELDS * width + lane);
+            }
+        }
+    }
+
+    /** Recomputes the scaled amplitudes of the record at slot j from its coefficients and basis. */
+    private void refresh(int j) {
+        int w = width;
+        double a1 = stepScale * data[j + ALPHA1 * w];
+        double a2 = stepScale * data[j + ALPHA2 * w];
+        double b1 = stepScale * data[j + BETA1 * w];
+        double b2 = stepScale * data[j + BETA2 * w];
+        data[j + AX * w] = a1 * data[j + E1X * w] + a2 * data[j + E2X * w];
+        data[j + AY * w] = a1 * data[j + E1Y * w] + a2 * data[j + E2Y * w];
+        data[j + AZ * w] = a1 * data[j + E1Z * w] + a2 * data[j + E2Z * w];
+        data[j + BX * w] = b1 * data[j + E1X * w] + b2 * data[j + E2X * w];
+        data[j + BY * w] = b1 * data[j + E1Y * w] + b2 * data[j + E2Y * w];
+        data[j + BZ * w] = b1 * data[j + E1Z * w] + b2 * data[j + E2Z * w];
     }
 }

@@ -7,11 +7,13 @@ package org.eddycast.field;
 public final class ReferenceShearKernel extends ScalarShearKernel {
 
     @Override
-    void sinCos(double[] p, double[] s, double[] c, int n) {
-        for (int i = 0; i < n; i++) {
-            s[i] = Math.sin(p[i]);
-            c[i] = Math.cos(p[i]);
-        }
+    double sine(double phase) {
+        return Math.sin(phase);
+    }
+
+    @Override
+    double cosine(double phase) {
+        return Math.cos(phase);
     }
 
     @Override

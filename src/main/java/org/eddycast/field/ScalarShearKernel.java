@@ -1,93 +1,119 @@
 package org.eddycast.field;
 
 /**
- * The kernel in plain scalar loops with our {@link FastSinCos}: the path when the Vector API module is absent.
- * The sines and cosines of one mode for all points are computed in one pass into scratch arrays, then applied.
+ * The kernel in plain scalar loops with our {@link FastSinCos}: the path when the Vector API module is absent,
+ * and the vector kernel's path for the points beyond its last whole vector. Each point is taken through every
+ * shear of the step before the next point.
  */
 public class ScalarShearKernel implements ShearKernel {
 
-    private double[] phase = new double[0];
-    private double[] sin = new double[0];
-    private double[] cos = new double[0];
-
-    /** Fills sin and cos of the phases 0..n-1; the reference kernel uses Math.sin and Math.cos instead. */
-    void sinCos(double[] p, double[] s, double[] c, int n) {
-        FastSinCos.sinCos(p, s, c, n);
+    /** The sine the kernel uses; the reference kernel overrides it with {@link Math#sin}. */
+    double sine(double phase) {
+        return FastSinCos.sin(phase);
     }
 
-    private void ensure(int n) {
-        if (phase.length < n) {
-            phase = new double[n];
-            sin = new double[n];
-            cos = new double[n];
-        }
+    /** The cosine the kernel uses; the reference kernel overrides it with {@link Math#cos}. */
+    double cosine(double phase) {
+        return FastSinCos.cos(phase);
     }
 
     @Override
-    public void shear(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n) {
-        apply(f, m, h, x, y, z, n, x, y, z);
-    }
-
-    @Override
-    public void addVelocity(ShearModeField f, int m, double[] x, double[] y, double[] z, int n,
-                            double[] vx, double[] vy, double[] vz) {
-        apply(f, m, 1.0, x, y, z, n, vx, vy, vz);
-    }
-
-    /**
-     * Adds h times mode m's velocity at (x, y, z) to (ox, oy, oz): the shear when the output is the position
-     * itself (every phase is taken before any point moves), the velocity sum when h = 1.
-     */
-    private void apply(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n,
-                       double[] ox, double[] oy, double[] oz) {
-        ensure(n);
-        double k1 = f.kx[m];
-        double k2 = f.ky[m];
-        double k3 = f.kz[m];
+    public void applyInTurn(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int n) {
+        int direction = last >= first ? 1 : -1;
         for (int i = 0; i < n; i++) {
-            phase[i] = k1 * x[i] + k2 * y[i] + k3 * z[i];
+            inTurnPoint(f, first, last + direction, direction, x, y, z, i);
         }
-        sinCos(phase, sin, cos, n);
-        double hax = h * f.ax[m];
-        double hay = h * f.ay[m];
-        double haz = h * f.az[m];
-        double hbx = h * f.bx[m];
-        double hby = h * f.by[m];
-        double hbz = h * f.bz[m];
+    }
+
+    @Override
+    public void applyAtOnce(ShearModeField f, double[] x, double[] y, double[] z, int n) {
         for (int i = 0; i < n; i++) {
-            ox[i] += hax * cos[i] + hbx * sin[i];
-            oy[i] += hay * cos[i] + hby * sin[i];
-            oz[i] += haz * cos[i] + hbz * sin[i];
+            atOncePoint(f, x, y, z, i);
         }
     }
 
-    @Override
-    public void shear(ModeLanes f, int m, double h, double[] x, double[] y, double[] z) {
-        apply(f, m, h, x, y, z, x, y, z);
+    /** Point i through modes first, first + direction, ... up to but not including stop, in turn. */
+    void inTurnPoint(ShearModeField f, int first, int stop, int direction, double[] x, double[] y, double[] z,
+                     int i) {
+        double px = x[i];
+        double py = y[i];
+        double pz = z[i];
+        for (int m = first; m != stop; m += direction) {
+            double p = f.kx[m] * px + f.ky[m] * py + f.kz[m] * pz;
+            double c = cosine(p);
+            double s = sine(p);
+            px += f.ax[m] * c + f.bx[m] * s;
+            py += f.ay[m] * c + f.by[m] * s;
+            pz += f.az[m] * c + f.bz[m] * s;
+        }
+        x[i] = px;
+        y[i] = py;
+        z[i] = pz;
+    }
+
+    /** Point i moved by the sum of every mode, all evaluated at its starting place. */
+    void atOncePoint(ShearModeField f, double[] x, double[] y, double[] z, int i) {
+        double dx = 0;
+        double dy = 0;
+        double dz = 0;
+        for (int m = 0; m < f.modes(); m++) {
+            double p = f.kx[m] * x[i] + f.ky[m] * y[i] + f.kz[m] * z[i];
+            double c = cosine(p);
+            double s = sine(p);
+            dx += f.ax[m] * c + f.bx[m] * s;
+            dy += f.ay[m] * c + f.by[m] * s;
+            dz += f.az[m] * c + f.bz[m] * s;
+        }
+        x[i] += dx;
+        y[i] += dy;
+        z[i] += dz;
     }
 
     @Override
-    public void addVelocity(ModeLanes f, int m, double[] x, double[] y, double[] z,
-                            double[] vx, double[] vy, double[] vz) {
-        apply(f, m, 1.0, x, y, z, vx, vy, vz);
-    }
-
-    /** The same for one realization per lane (mode parameters laid out [mode][quantity][lane]). */
-    private void apply(ModeLanes f, int m, double h, double[] x, double[] y, double[] z,
-                       double[] ox, double[] oy, double[] oz) {
+    public void applyInTurn(ModeLanes f, int first, int last, double[] x, double[] y, double[] z) {
         int n = f.width();
-        ensure(n);
-        int o = m * ModeLanes.FIELDS * n;
+        int direction = last >= first ? 1 : -1;
+        double[] d = f.data;
         for (int i = 0; i < n; i++) {
-            int j = o + i;
-            phase[i] = f.data[j + ModeLanes.KX * n] * x[i] + f.data[j + ModeLanes.KY * n] * y[i]
-                    + f.data[j + ModeLanes.KZ * n] * z[i];
+            double px = x[i];
+            double py = y[i];
+            double pz = z[i];
+            for (int m = first; m != last + direction; m += direction) {
+                int j = m * ModeLanes.FIELDS * n + i;
+                double p = d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz;
+                double c = cosine(p);
+                double s = sine(p);
+                px += d[j + ModeLanes.AX * n] * c + d[j + ModeLanes.BX * n] * s;
+                py += d[j + ModeLanes.AY * n] * c + d[j + ModeLanes.BY * n] * s;
+                pz += d[j + ModeLanes.AZ * n] * c + d[j + ModeLanes.BZ * n] * s;
+            }
+            x[i] = px;
+            y[i] = py;
+            z[i] = pz;
         }
-        sinCos(phase, sin, cos, n);
+    }
+
+    @Override
+    public void applyAtOnce(ModeLanes f, double[] x, double[] y, double[] z) {
+        int n = f.width();
+        double[] d = f.data;
         for (int i = 0; i < n; i++) {
-            ox[i] += h * (f.data[o + i + ModeLanes.AX * n] * cos[i] + f.data[o + i + ModeLanes.BX * n] * sin[i]);
-            oy[i] += h * (f.data[o + i + ModeLanes.AY * n] * cos[i] + f.data[o + i + ModeLanes.BY * n] * sin[i]);
-            oz[i] += h * (f.data[o + i + ModeLanes.AZ * n] * cos[i] + f.data[o + i + ModeLanes.BZ * n] * sin[i]);
+            double dx = 0;
+            double dy = 0;
+            double dz = 0;
+            for (int m = 0; m < f.modes(); m++) {
+                int j = m * ModeLanes.FIELDS * n + i;
+                double p = d[j + ModeLanes.KX * n] * x[i] + d[j + ModeLanes.KY * n] * y[i]
+                        + d[j + ModeLanes.KZ * n] * z[i];
+                double c = cosine(p);
+                double s = sine(p);
+                dx += d[j + ModeLanes.AX * n] * c + d[j + ModeLanes.BX * n] * s;
+                dy += d[j + ModeLanes.AY * n] * c + d[j + ModeLanes.BY * n] * s;
+                dz += d[j + ModeLanes.AZ * n] * c + d[j + ModeLanes.BZ * n] * s;
+            }
+            x[i] += dx;
+            y[i] += dy;
+            z[i] += dz;
         }
     }
 
@@ -95,24 +121,30 @@ public class ScalarShearKernel implements ShearKernel {
     public void advance(ModeLanes f, int m, double[] normals) {
         int n = f.width();
         int o = m * ModeLanes.FIELDS * n;
+        double h = f.stepScale();
+        double[] d = f.data;
         for (int i = 0; i < n; i++) {
             int j = o + i;
-            double rho = f.data[j + ModeLanes.DECAY * n];
-            double k = f.data[j + ModeLanes.KICK * n];
-            double a1 = rho * f.data[j + ModeLanes.ALPHA1 * n] + k * normals[i];
-            double b1 = rho * f.data[j + ModeLanes.BETA1 * n] + k * normals[n + i];
-            double a2 = rho * f.data[j + ModeLanes.ALPHA2 * n] + k * normals[2 * n + i];
-            double b2 = rho * f.data[j + ModeLanes.BETA2 * n] + k * normals[3 * n + i];
-            f.data[j + ModeLanes.ALPHA1 * n] = a1;
-            f.data[j + ModeLanes.BETA1 * n] = b1;
-            f.data[j + ModeLanes.ALPHA2 * n] = a2;
-            f.data[j + ModeLanes.BETA2 * n] = b2;
-            f.data[j + ModeLanes.AX * n] = a1 * f.data[j + ModeLanes.E1X * n] + a2 * f.data[j + ModeLanes.E2X * n];
-            f.data[j + ModeLanes.AY * n] = a1 * f.data[j + ModeLanes.E1Y * n] + a2 * f.data[j + ModeLanes.E2Y * n];
-            f.data[j + ModeLanes.AZ * n] = a1 * f.data[j + ModeLanes.E1Z * n] + a2 * f.data[j + ModeLanes.E2Z * n];
-            f.data[j + ModeLanes.BX * n] = b1 * f.data[j + ModeLanes.E1X * n] + b2 * f.data[j + ModeLanes.E2X * n];
-            f.data[j + ModeLanes.BY * n] = b1 * f.data[j + ModeLanes.E1Y * n] + b2 * f.data[j + ModeLanes.E2Y * n];
-            f.data[j + ModeLanes.BZ * n] = b1 * f.data[j + ModeLanes.E1Z * n] + b2 * f.data[j + ModeLanes.E2Z * n];
+            double rho = d[j + ModeLanes.DECAY * n];
+            double k = d[j + ModeLanes.KICK * n];
+            double a1 = k * normals[i] + rho * d[j + ModeLanes.ALPHA1 * n];
+            double b1 = k * normals[n + i] + rho * d[j + ModeLanes.BETA1 * n];
+            double a2 = k * normals[2 * n + i] + rho * d[j + ModeLanes.ALPHA2 * n];
+            double b2 = k * normals[3 * n + i] + rho * d[j + ModeLanes.BETA2 * n];
+            d[j + ModeLanes.ALPHA1 * n] = a1;
+            d[j + ModeLanes.BETA1 * n] = b1;
+            d[j + ModeLanes.ALPHA2 * n] = a2;
+            d[j + ModeLanes.BETA2 * n] = b2;
+            a1 *= h;
+            b1 *= h;
+            a2 *= h;
+            b2 *= h;
+            d[j + ModeLanes.AX * n] = a1 * d[j + ModeLanes.E1X * n] + a2 * d[j + ModeLanes.E2X * n];
+            d[j + ModeLanes.AY * n] = a1 * d[j + ModeLanes.E1Y * n] + a2 * d[j + ModeLanes.E2Y * n];
+            d[j + ModeLanes.AZ * n] = a1 * d[j + ModeLanes.E1Z * n] + a2 * d[j + ModeLanes.E2Z * n];
+            d[j + ModeLanes.BX * n] = b1 * d[j + ModeLanes.E1X * n] + b2 * d[j + ModeLanes.E2X * n];
+            d[j + ModeLanes.BY * n] = b1 * d[j + ModeLanes.E1Y * n] + b2 * d[j + ModeLanes.E2Y * n];
+            d[j + ModeLanes.BZ * n] = b1 * d[j + ModeLanes.E1Z * n] + b2 * d[j + ModeLanes.E2Z * n];
         }
     }
 

@@ -1,35 +1,43 @@
 package org.eddycast.field;
 
 /**
- * The inner loops of the particle step: one shear mode's exact map, or its velocity, over arrays of particle
- * coordinates, for particles sharing one realization ({@link ShearModeField}) or each carrying its own
- * ({@link ModeLanes}, particle i in lane i); and the Ornstein-Uhlenbeck update of the lanes' amplitudes.
+ * The inner loops of the particle step: shears x &lt;- x + h (a cos(k . x) + b sin(k . x)) applied to arrays of
+ * particle coordinates, either in turn (each shear moves the points before the next is evaluated: the
+ * splitting schemes) or at once (every shear evaluated at the starting point and the sum added: the Euler
+ * step); for particles sharing one realization ({@link ShearModeField}) or each carrying its own
+ * ({@link ModeLanes}, particle i in lane i), with the substep h carried by the stored amplitudes (their step
+ * scale); and the Ornstein-Uhlenbeck update of the lanes' amplitudes.
  *
- * <p>Each call does one mode for all particles, so the method is small, compiles early and its loop runs over
- * independent particles. Implementations differ only in speed and in rounding: {@link VectorShearKernel} (the
- * Vector API), {@link ScalarShearKernel} (plain loops with {@link FastSinCos}) and
- * {@link ReferenceShearKernel} (plain loops with {@link Math#sin} and {@link Math#cos}, for tests).
+ * <p>Each call takes every point through every shear of the step, so a point's coordinates stay in registers
+ * from the first shear to the last. Implementations differ only in speed and in rounding:
+ * {@link VectorShearKernel} (the Vector API), {@link ScalarShearKernel} (plain loops with {@link FastSinCos})
+ * and {@link ReferenceShearKernel} (plain loops with {@link Math#sin} and {@link Math#cos}, for tests).
  * An instance may hold scratch space: one per thread.
  */
 public interface ShearKernel {
 
-    /** x &lt;- x + h (a_m cos(k_m . x) + b_m sin(k_m . x)) for points 0..n-1 (z ignored in 2D). */
-    void shear(ShearModeField f, int m, double h, double[] x, double[] y, double[] z, int n);
+    /**
+     * Applies modes first, first +- 1, ..., last (either direction) of the shared realization, in turn, to
+     * points 0..n-1 (z ignored in 2D).
+     */
+    void applyInTurn(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int n);
 
-    /** v &lt;- v + a_m cos(k_m . x) + b_m sin(k_m . x) for points 0..n-1. */
-    void addVelocity(ShearModeField f, int m, double[] x, double[] y, double[] z, int n,
-                     double[] vx, double[] vy, double[] vz);
+    /** Adds the sum of every mode of the shared realization, evaluated at the starting point, to points 0..n-1. */
+    void applyAtOnce(ShearModeField f, double[] x, double[] y, double[] z, int n);
 
-    /** The shear of mode m for particle i in lane i's own realization, all lanes. */
-    void shear(ModeLanes f, int m, double h, double[] x, double[] y, double[] z);
+    /**
+     * Applies modes first, first +- 1, ..., last (either direction) of each lane's own realization, in turn,
+     * to the particle in that lane, every lane.
+     */
+    void applyInTurn(ModeLanes f, int first, int last, double[] x, double[] y, double[] z);
 
-    /** The velocity of mode m for particle i in lane i's own realization, all lanes. */
-    void addVelocity(ModeLanes f, int m, double[] x, double[] y, double[] z, double[] vx, double[] vy, double[] vz);
+    /** Adds the sum of every mode of each lane's realization, evaluated at the starting point, every lane. */
+    void applyAtOnce(ModeLanes f, double[] x, double[] y, double[] z);
 
     /**
      * Advances mode m's coefficients in every lane by the exact Ornstein-Uhlenbeck transition with standard
      * normal variates {@code normals[0 .. 4 * width)} (alpha1, beta1, alpha2, beta2, each a run of width
-     * values), then refreshes the lanes' amplitudes of mode m.
+     * values), then refreshes the lanes' scaled amplitudes of mode m.
      */
     void advance(ModeLanes f, int m, double[] normals);
 

@@ -19,6 +19,10 @@ import java.util.random.RandomGenerator;
  * (Uhlenbeck and Ornstein 1930, "On the theory of the Brownian motion", Phys. Rev. 36:823-841); an infinite
  * tau or a zero sigma holds a coefficient fixed.
  *
+ * <p>The amplitude arrays hold the amplitudes multiplied by a step scale h (1 unless set), the substep of the
+ * scheme that reads them, so that the particle kernels need no multiplication by h in their inner loops;
+ * {@link #amplitudes} and {@link #velocityAt} give the amplitudes themselves.
+ *
  * <p>A mutable workspace owned by one thread: the particle kernels read its arrays directly.
  */
 public final class ShearModeField {
@@ -50,6 +54,7 @@ public final class ShearModeField {
     private final double[] kick;
     private final boolean[] twoPolarizations;
     private boolean anyRandomInTime;
+    private double stepScale = 1.0;
 
     public ShearModeField(int dimensions, int modes) {
         if (dimensions != 2 && dimensions != 3) {
@@ -161,35 +166,54 @@ public final class ShearModeField {
 
     /**
      * Advances every coefficient by one prepared step with standard normal variates taken from
-     * {@code normals[offset ..]}, four per mode (alpha1, beta1, alpha2, beta2; the last two unused with one
-     * polarization), and refreshes the amplitudes. A steady mode ignores its variates.
+     * {@code normals[offset ..]}, four runs of one per mode (alpha1, beta1, alpha2, beta2; the last two unused
+     * with one polarization), and refreshes the amplitudes. A steady mode ignores its variates.
      */
     public void advanceAmplitudes(double[] normals, int offset) {
         if (!anyRandomInTime) {
             return;
         }
-        for (int m = 0, j = offset; m < modes; m++, j += 4) {
-            double k = kick[m];
-            double rho = decay[m];
-            alpha1[m] = rho * alpha1[m] + k * normals[j];
-            beta1[m] = rho * beta1[m] + k * normals[j + 1];
-            alpha2[m] = rho * alpha2[m] + k * normals[j + 2];
-            beta2[m] = rho * beta2[m] + k * normals[j + 3];
+        int a1 = offset;
+        int b1 = offset + modes;
+        int a2 = offset + 2 * modes;
+        int b2 = offset + 3 * modes;
+        // Plain loops over contiguous arrays, which the JIT vectorizes.
+        for (int m = 0; m < modes; m++) {
+            alpha1[m] = decay[m] * alpha1[m] + kick[m] * normals[a1 + m];
+        }
+        for (int m = 0; m < modes; m++) {
+            beta1[m] = decay[m] * beta1[m] + kick[m] * normals[b1 + m];
+        }
+        for (int m = 0; m < modes; m++) {
+            alpha2[m] = decay[m] * alpha2[m] + kick[m] * normals[a2 + m];
+        }
+        for (int m = 0; m < modes; m++) {
+            beta2[m] = decay[m] * beta2[m] + kick[m] * normals[b2 + m];
         }
         refreshAmplitudes();
     }
 
-    /** Copies mode m (geometry, coefficients, prepared transition) into a lane record starting at slot j. */
+    /** The factor h the amplitude arrays carry. */
+    public double stepScale() {
+        return stepScale;
+    }
+
+    /** Stores the amplitudes multiplied by h from now on. */
+    public void setStepScale(double h) {
+        if (h != stepScale) {
+            stepScale = h;
+            refreshAmplitudes();
+        }
+    }
+
+    /**
+     * Copies mode m (geometry, coefficients, prepared transition) into a lane record starting at slot j; the
+     * lanes compute their own amplitudes from the coefficients.
+     */
     void copyMode(int m, double[] data, int j, int stride) {
         data[j + ModeLanes.KX * stride] = kx[m];
         data[j + ModeLanes.KY * stride] = ky[m];
         data[j + ModeLanes.KZ * stride] = kz[m];
-        data[j + ModeLanes.AX * stride] = ax[m];
-        data[j + ModeLanes.AY * stride] = ay[m];
-        data[j + ModeLanes.AZ * stride] = az[m];
-        data[j + ModeLanes.BX * stride] = bx[m];
-        data[j + ModeLanes.BY * stride] = by[m];
-        data[j + ModeLanes.BZ * stride] = bz[m];
         data[j + ModeLanes.E1X * stride] = e1x[m];
         data[j + ModeLanes.E1Y * stride] = e1y[m];
         data[j + ModeLanes.E1Z * stride] = e1z[m];
@@ -205,13 +229,16 @@ public final class ShearModeField {
     }
 
     private void refreshAmplitudes() {
+        double h = stepScale;
         for (int m = 0; m < modes; m++) {
-            ax[m] = alpha1[m] * e1x[m] + alpha2[m] * e2x[m];
-            ay[m] = alpha1[m] * e1y[m] + alpha2[m] * e2y[m];
-            az[m] = alpha1[m] * e1z[m] + alpha2[m] * e2z[m];
-            bx[m] = beta1[m] * e1x[m] + beta2[m] * e2x[m];
-            by[m] = beta1[m] * e1y[m] + beta2[m] * e2y[m];
-            bz[m] = beta1[m] * e1z[m] + beta2[m] * e2z[m];
+            ax[m] = h * (alpha1[m] * e1x[m] + alpha2[m] * e2x[m]);
+            ay[m] = h * (alpha1[m] * e1y[m] + alpha2[m] * e2y[m]);
+            az[m] = h * (alpha1[m] * e1z[m] + alpha2[m] * e2z[m]);
+        }
+        for (int m = 0; m < modes; m++) {
+            bx[m] = h * (beta1[m] * e1x[m] + beta2[m] * e2x[m]);
+            by[m] = h * (beta1[m] * e1y[m] + beta2[m] * e2y[m]);
+            bz[m] = h * (beta1[m] * e1z[m] + beta2[m] * e2z[m]);
         }
     }
 
@@ -224,8 +251,8 @@ public final class ShearModeField {
         }
         for (int m = 0; m < modes; m++) {
             double p = kx[m] * point[0] + ky[m] * point[1] + (dimensions == 3 ? kz[m] * point[2] : 0.0);
-            double c = Math.cos(p);
-            double s = Math.sin(p);
+            double c = Math.cos(p) / stepScale;
+            double s = Math.sin(p) / stepScale;
             out[0] += ax[m] * c + bx[m] * s;
             out[1] += ay[m] * c + by[m] * s;
             if (dimensions == 3) {
@@ -245,13 +272,13 @@ public final class ShearModeField {
 
     /** Mode m's current cos and sin amplitudes, copied into a and b. */
     public void amplitudes(int m, double[] a, double[] b) {
-        a[0] = ax[m];
-        a[1] = ay[m];
-        b[0] = bx[m];
-        b[1] = by[m];
+        a[0] = ax[m] / stepScale;
+        a[1] = ay[m] / stepScale;
+        b[0] = bx[m] / stepScale;
+        b[1] = by[m] / stepScale;
         if (dimensions == 3) {
-            a[2] = az[m];
-            b[2] = bz[m];
+            a[2] = az[m] / stepScale;
+            b[2] = bz[m] / stepScale;
         }
     }
 }

@@ -1,6 +1,5 @@
 package org.eddycast.particles;
 
-import java.util.Arrays;
 import java.util.Locale;
 import org.eddycast.field.ModeLanes;
 import org.eddycast.field.ShearKernel;
@@ -14,86 +13,59 @@ import org.eddycast.field.ShearModeField;
  * <p>The splitting schemes compose the exact flows of the single modes: each substep is a shear with unit
  * Jacobian determinant, so volume is preserved to round-off (McLachlan and Quispel 2002, "Splitting methods",
  * Acta Numerica 11:341-434). Lie applies the modes once in order (first order); Strang applies them forward
- * with half steps and back with half steps, the middle mode merged into one full step (second order in the
- * drift, 2M - 1 shears per step). Euler-Maruyama evaluates the full velocity at the start point and is kept
+ * with half steps and back with half steps, the middle mode's two halves making one full step (second order
+ * in the drift, 2M shear evaluations per step). Euler-Maruyama evaluates the full velocity at the start point and is kept
  * as a baseline (Kloeden and Platen 1992, Numerical Solution of Stochastic Differential Equations, Springer).
  */
 public enum Integrator {
 
     EULER_MARUYAMA("euler") {
         @Override
-        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
-            Arrays.fill(p.vx, 0, n, 0.0);
-            Arrays.fill(p.vy, 0, n, 0.0);
-            Arrays.fill(p.vz, 0, n, 0.0);
-            for (int m = 0; m < field.modes(); m++) {
-                kernel.addVelocity(field, m, p.x, p.y, p.z, n, p.vx, p.vy, p.vz);
-            }
-            move(p, n, dt);
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n) {
+            kernel.applyAtOnce(field, p.x, p.y, p.z, n);
         }
 
         @Override
-        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
-            int n = lanes.width();
-            Arrays.fill(p.vx, 0, n, 0.0);
-            Arrays.fill(p.vy, 0, n, 0.0);
-            Arrays.fill(p.vz, 0, n, 0.0);
-            for (int m = 0; m < lanes.modes(); m++) {
-                kernel.addVelocity(lanes, m, p.x, p.y, p.z, p.vx, p.vy, p.vz);
-            }
-            move(p, n, dt);
-        }
-
-        private void move(ParticleBlock p, int n, double dt) {
-            for (int i = 0; i < n; i++) {
-                p.x[i] += dt * p.vx[i];
-                p.y[i] += dt * p.vy[i];
-                p.z[i] += dt * p.vz[i];
-            }
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p) {
+            kernel.applyAtOnce(lanes, p.x, p.y, p.z);
         }
     },
 
     LIE("lie") {
         @Override
-        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
-            for (int m = 0; m < field.modes(); m++) {
-                kernel.shear(field, m, dt, p.x, p.y, p.z, n);
-            }
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n) {
+            kernel.applyInTurn(field, 0, field.modes() - 1, p.x, p.y, p.z, n);
         }
 
         @Override
-        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
-            for (int m = 0; m < lanes.modes(); m++) {
-                kernel.shear(lanes, m, dt, p.x, p.y, p.z);
-            }
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p) {
+            kernel.applyInTurn(lanes, 0, lanes.modes() - 1, p.x, p.y, p.z);
         }
     },
 
+    /**
+     * Forward and back with half steps: the middle mode's two half steps make its exact full step, since a
+     * shear leaves its own phase unchanged, so this is the symmetric composition with 2M - 1 distinct shears
+     * (the middle one computed as two halves).
+     */
     STRANG("strang") {
         @Override
-        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt) {
+        void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n) {
             int last = field.modes() - 1;
-            double half = 0.5 * dt;
-            for (int m = 0; m < last; m++) {
-                kernel.shear(field, m, half, p.x, p.y, p.z, n);
-            }
-            kernel.shear(field, last, dt, p.x, p.y, p.z, n);
-            for (int m = last - 1; m >= 0; m--) {
-                kernel.shear(field, m, half, p.x, p.y, p.z, n);
-            }
+            kernel.applyInTurn(field, 0, last, p.x, p.y, p.z, n);
+            kernel.applyInTurn(field, last, 0, p.x, p.y, p.z, n);
         }
 
         @Override
-        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt) {
+        void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p) {
             int last = lanes.modes() - 1;
-            double half = 0.5 * dt;
-            for (int m = 0; m < last; m++) {
-                kernel.shear(lanes, m, half, p.x, p.y, p.z);
-            }
-            kernel.shear(lanes, last, dt, p.x, p.y, p.z);
-            for (int m = last - 1; m >= 0; m--) {
-                kernel.shear(lanes, m, half, p.x, p.y, p.z);
-            }
+            kernel.applyInTurn(lanes, 0, last, p.x, p.y, p.z);
+            kernel.applyInTurn(lanes, last, 0, p.x, p.y, p.z);
+        }
+
+        @Override
+        double stepScale(double dt) {
+            return 0.5 * dt;
         }
     };
 
@@ -123,9 +95,17 @@ public enum Integrator {
         return null;
     }
 
-    /** Advances the first n particles of the block, sharing one realization, by the drift over dt. */
-    abstract void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n, double dt);
+    /** The substep h the stored amplitudes must carry for this scheme's drift over dt. */
+    double stepScale(double dt) {
+        return dt;
+    }
 
-    /** Advances particle i of the block in lane i's own realization, every lane, by the drift over dt. */
-    abstract void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p, double dt);
+    /**
+     * Advances the first n particles of the block, sharing one realization, by the drift over the step the
+     * field's amplitudes are scaled for ({@link #stepScale}).
+     */
+    abstract void drift(ShearKernel kernel, ShearModeField field, ParticleBlock p, int n);
+
+    /** The same for particle i of the block in lane i's own realization, every lane. */
+    abstract void drift(ShearKernel kernel, ModeLanes lanes, ParticleBlock p);
 }

@@ -8,11 +8,14 @@ import java.util.random.RandomGenerator;
  * into pairs of normals by the Box-Muller transform (Box and Muller 1958, "A note on the generation of random
  * normal deviates", Ann. Math. Statist. 29:610-611).
  *
- * <p>Each call of {@link #fill} produces runs of {@value #RUN} values: lane l's pair of uniforms (u1 in
- * (0, 1], u2 in [0, 1), 52 random bits each) gives r cos(2 pi u2) at position l and r sin(2 pi u2) at
- * position {@value #LANES} + l, r = sqrt(-2 ln u1). The smallest u1 is 2^-52, so the variates are exact normals
- * cut at 8.5 standard deviations (a tail mass near 2e-17). The lanes' starting states are drawn from the
- * block's own generator, so a block's variates are fixed by the run's seed and the block's index.
+ * <p>Each call of {@link #fill} produces runs of {@value #RUN} values from one pair of 64-bit outputs (z1, z2)
+ * per lane: u = 2 - (1 + 52 bits of z1) in (0, 1] gives the radius r = sqrt(-2 ln u); 52 further bits of z2
+ * give an angle theta uniform in [-pi/2, pi/2), and z2's lowest bit a sign s; lane l writes s r cos(theta) at
+ * position l and s r sin(theta) at position {@value #LANES} + l. A uniform angle on the half circle with a
+ * random sign of the pair is a uniform angle on the whole circle, so the pair is that of Box and Muller; drawn
+ * this way the angle needs no range reduction. The smallest u is 2^-52, so the variates are exact normals cut
+ * at 8.5 standard deviations (a tail mass near 2e-17). The lanes' starting states are drawn from the block's
+ * own generator, so a block's variates are fixed by the run's seed and the block's index.
  *
  * <p>Owned by one thread. Implementations differ only in rounding ({@link VectorNormalStream} evaluates the
  * logarithm and the sine and cosine in vector form).
@@ -43,6 +46,10 @@ public abstract class NormalStream {
     public static int roundUp(int count) {
         return (count + RUN - 1) / RUN * RUN;
     }
+
+    /** pi and -3 pi / 2: the angle is pi (1 + v) - 3 pi / 2 for v uniform in [0, 1). */
+    static final double PI = Math.PI;
+    static final double MINUS_THREE_HALVES_PI = -1.5 * Math.PI;
 
     static long mix(long z) {
         z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;

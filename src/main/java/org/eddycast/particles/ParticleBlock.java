@@ -1,8 +1,7 @@
 package org.eddycast.particles;
 
 /**
- * Positions of a block of particles as structure-of-arrays doubles, their starting points, and a velocity
- * scratch for the Euler scheme. Owned by one thread; nothing is allocated after construction.
+ * Positions of a block of particles as structure-of-arrays doubles, and their starting points. Owned by one thread; nothing is allocated after construction.
  */
 public final class ParticleBlock {
 
@@ -13,9 +12,6 @@ public final class ParticleBlock {
     final double[] x0;
     final double[] y0;
     final double[] z0;
-    final double[] vx;
-    final double[] vy;
-    final double[] vz;
 
     public ParticleBlock(int size) {
         if (size < 1) {
@@ -28,9 +24,6 @@ public final class ParticleBlock {
         x0 = new double[size];
         y0 = new double[size];
         z0 = new double[size];
-        vx = new double[size];
-        vy = new double[size];
-        vz = new double[size];
     }
 
     public int size() {

@@ -55,7 +55,8 @@ public final class ParticleStepper {
      * Uses 3n normal variates for the Brownian steps and 4 per mode for the amplitudes.
      */
     public void step(ShearModeField field, ParticleBlock p, int n, NormalStream source) {
-        integrator.drift(kernel, field, p, n, dt);
+        field.setStepScale(integrator.stepScale(dt));
+        integrator.drift(kernel, field, p, n);
         int need = NormalStream.roundUp(3 * n + 4 * field.modes());
         double[] xi = normals(need);
         source.fill(xi, need);
@@ -65,7 +66,8 @@ public final class ParticleStepper {
 
     /** Advances every particle of the block, each in its lane's own realization, and the lanes by one step. */
     public void step(ModeLanes lanes, ParticleBlock p, NormalStream source) {
-        integrator.drift(kernel, lanes, p, dt);
+        lanes.setStepScale(integrator.stepScale(dt));
+        integrator.drift(kernel, lanes, p);
         int n = lanes.width();
         int need = NormalStream.roundUp(Math.max(3 * n, 4 * n));
         double[] xi = normals(need);
@@ -105,6 +107,7 @@ public final class ParticleStepper {
 
     /** Advances the first n particles by the drift only (no noise, amplitudes held): for tests of the map. */
     public void driftOnly(ShearModeField field, ParticleBlock p, int n) {
-        integrator.drift(kernel, field, p, n, dt);
+        field.setStepScale(integrator.stepScale(dt));
+        integrator.drift(kernel, field, p, n);
     }
 }

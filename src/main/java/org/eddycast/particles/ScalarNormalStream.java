@@ -2,10 +2,11 @@ package org.eddycast.particles;
 
 import org.eddycast.field.FastSinCos;
 
-/** {@link NormalStream} in plain scalar code, lane after lane. */
+/**
+ * {@link NormalStream} in plain scalar code, lane after lane, with the JDK's logarithm and the polynomial sine
+ * and cosine of {@link FastSinCos} (the angle needs no reduction).
+ */
 public final class ScalarNormalStream extends NormalStream {
-
-    private static final double TWO_PI = 2 * Math.PI;
 
     @Override
     public void fill(double[] out, int count) {
@@ -17,12 +18,16 @@ public final class ScalarNormalStream extends NormalStream {
                 long s1 = state[l] + GAMMA;
                 long s2 = s1 + GAMMA;
                 state[l] = s2;
-                double u1 = 2.0 - Double.longBitsToDouble((mix(s1) >>> 12) | ONE_BITS);
-                double u2 = Double.longBitsToDouble((mix(s2) >>> 12) | ONE_BITS) - 1.0;
-                double r = Math.sqrt(-2.0 * Math.log(u1));
-                double theta = TWO_PI * u2;
-                out[base + l] = r * FastSinCos.cos(theta);
-                out[base + LANES + l] = r * FastSinCos.sin(theta);
+                long z1 = mix(s1);
+                long z2 = mix(s2);
+                double u = 2.0 - Double.longBitsToDouble((z1 >>> 12) | ONE_BITS);
+                double theta = Math.fma(Double.longBitsToDouble((z2 >>> 12) | ONE_BITS), PI, MINUS_THREE_HALVES_PI);
+                double r = Math.sqrt(-2.0 * Math.log(u));
+                if ((z2 & 1L) != 0) {
+                    r = -r;
+                }
+                out[base + l] = r * FastSinCos.cosOfReduced(theta);
+                out[base + LANES + l] = r * FastSinCos.sinOfReduced(theta);
             }
         }
     }

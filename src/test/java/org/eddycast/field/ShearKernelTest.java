@@ -1,26 +1,29 @@
 package org.eddycast.field;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
+import java.util.random.RandomGeneratorFactory;
 import org.junit.jupiter.api.Test;
 
 /**
- * The fast kernels against the JDK's {@link Math#sin} and {@link Math#cos} (accurate to 1 ulp by their
- * specification). A single mode with k = (1, 0, 0), a = (1, 0, 0) and b = (0, 1, 0), applied to a point with
- * x = phase, adds cos(phase) to the x velocity and sin(phase) to the y velocity: the kernel's own sine and
- * cosine come out directly, for the shared and the per-lane layouts.
+ * The fast kernels against the JDK's {@link Math#sin} and {@link Math#cos} (within 1 ulp by their
+ * specification). A single mode with k = (1, 0, 0), a = (0, 0, 1) and b = (0, 1, 0), applied with h = 1 to a
+ * point (phase, 0, 0), moves it to (phase, sin(phase), cos(phase)): the kernel's own sine and cosine come out
+ * directly, for the shared and the per-lane layouts, in turn and at once.
  */
 class ShearKernelTest {
 
+    /** Bundles of four vectors, one single vector and three points one by one. */
+    private static final int POINTS = 4096 + 8 + 3;
+
     private static ShearModeField probeField() {
-        ShearModeField f = new ShearModeField(3, 2);
-        f.setMode(0, new double[] {1, 0, 0}, new double[] {1, 0, 0}, new double[] {0, 1, 0}, 0,
+        ShearModeField f = new ShearModeField(3, 1);
+        f.setMode(0, new double[] {1, 0, 0}, new double[] {0, 0, 1}, new double[] {0, 1, 0}, 0,
                 Double.POSITIVE_INFINITY);
         f.setCoefficients(0, 1, 0, 0, 1);
-        f.setMode(1, new double[] {0, 0, 1}, new double[] {1, 0, 0}, new double[] {0, 1, 0}, 0,
-                Double.POSITIVE_INFINITY);
         f.prepareStep(0.1);
         return f;
     }
@@ -36,83 +39,152 @@ class ShearKernelTest {
         return p;
     }
 
-    private static double worstError(ShearKernel kernel, boolean lanes) {
-        int n = 4099; // not a multiple of any vector length, so the shared path's tail is exercised too
-        double[] x = phases(n);
-        double[] y = new double[n];
-        double[] z = new double[n];
-        double[] vx = new double[n];
-        double[] vy = new double[n];
-        double[] vz = new double[n];
+    private static double worstError(ShearKernel kernel, boolean lanes, boolean inTurn) {
+        double[] x = phases(POINTS);
+        double[] start = x.clone();
+        double[] y = new double[POINTS];
+        double[] z = new double[POINTS];
         ShearModeField f = probeField();
+        int n = POINTS;
         if (lanes) {
-            int width = 4096;
-            ModeLanes l = new ModeLanes(3, 2, width);
-            for (int i = 0; i < width; i++) {
+            n = 4096;
+            ModeLanes l = new ModeLanes(3, 1, n);
+            for (int i = 0; i < n; i++) {
                 l.load(i, f);
             }
-            kernel.addVelocity(l, 0, x, y, z, vx, vy, vz);
-            n = width;
+            if (inTurn) {
+                kernel.applyInTurn(l, 0, 0, x, y, z);
+            } else {
+                kernel.applyAtOnce(l, x, y, z);
+            }
+        } else if (inTurn) {
+            kernel.applyInTurn(f, 0, 0, x, y, z, n);
         } else {
-            kernel.addVelocity(f, 0, x, y, z, n, vx, vy, vz);
+            kernel.applyAtOnce(f, x, y, z, n);
         }
         double worst = 0;
         for (int i = 0; i < n; i++) {
-            worst = Math.max(worst, Math.abs(vx[i] - Math.cos(x[i])));
-            worst = Math.max(worst, Math.abs(vy[i] - Math.sin(x[i])));
-            assertEquals(0.0, vz[i], 0.0);
+            assertEquals(start[i], x[i], 0.0, "the shear must leave its own phase unchanged");
+            worst = Math.max(worst, Math.abs(z[i] - Math.cos(start[i])));
+            worst = Math.max(worst, Math.abs(y[i] - Math.sin(start[i])));
         }
         return worst;
     }
 
-    @Test
-    void vectorKernelSineAndCosineWithinTwoEMinus15() {
-        ShearKernel vector = new VectorShearKernel();
-        assertTrue(worstError(vector, false) < 2e-15, "shared layout: " + worstError(vector, false));
-        assertTrue(worstError(vector, true) < 2e-15, "lane layout: " + worstError(vector, true));
+    private static void assertWithinTwoEMinus13(ShearKernel kernel) {
+        for (boolean lanes : new boolean[] {false, true}) {
+            for (boolean inTurn : new boolean[] {false, true}) {
+                double worst = worstError(kernel, lanes, inTurn);
+                assertTrue(worst < 2e-13, (lanes ? "lane" : "shared") + " layout, " + (inTurn ? "in turn" : "at once")
+                        + ": largest error " + worst);
+            }
+        }
     }
 
     @Test
-    void scalarKernelSineAndCosineWithinTwoEMinus15() {
-        ShearKernel scalar = new ScalarShearKernel();
-        assertTrue(worstError(scalar, false) < 2e-15, "shared layout: " + worstError(scalar, false));
-        assertTrue(worstError(scalar, true) < 2e-15, "lane layout: " + worstError(scalar, true));
+    void vectorKernelSineAndCosineWithinTwoEMinus13() {
+        assertWithinTwoEMinus13(new VectorShearKernel());
     }
 
-    /** The shear of the vector kernel equals the reference kernel's to rounding, in both layouts. */
     @Test
-    void vectorShearMatchesTheReferenceShear() {
+    void scalarKernelSineAndCosineWithinTwoEMinus13() {
+        assertWithinTwoEMinus13(new ScalarShearKernel());
+    }
+
+    private static ShearModeField realization() {
         ShearModeField f = new ShearModeField(3, 3);
         new RandomFourierModel(new SpectrumTable(new PowerLawBand(-5.0 / 3.0, 16), 3, 3), 1.0, "test")
-                .realize(f, java.util.random.RandomGeneratorFactory.of("L64X128MixRandom").create(8));
+                .realize(f, RandomGeneratorFactory.of("L64X128MixRandom").create(8));
         f.prepareStep(0.02);
-        int n = 64;
-        double[][] fast = new double[3][n];
-        double[][] slow = new double[3][n];
+        return f;
+    }
+
+    private static double[][] points(int n) {
         SplittableRandom random = new SplittableRandom(6);
-        for (int i = 0; i < n; i++) {
-            for (int a = 0; a < 3; a++) {
-                fast[a][i] = random.nextDouble(-20, 20);
-                slow[a][i] = fast[a][i];
-            }
-        }
-        ShearKernel vector = new VectorShearKernel();
-        ShearKernel reference = new ReferenceShearKernel();
-        ModeLanes lanes = new ModeLanes(3, 3, n);
-        for (int i = 0; i < n; i++) {
-            lanes.load(i, f);
-        }
-        for (int m = 0; m < 3; m++) {
-            vector.shear(f, m, 0.02, fast[0], fast[1], fast[2], n);
-            reference.shear(f, m, 0.02, slow[0], slow[1], slow[2], n);
-            vector.shear(lanes, m, 0.02, fast[0], fast[1], fast[2]);
-            reference.shear(lanes, m, 0.02, slow[0], slow[1], slow[2]);
-        }
+        double[][] p = new double[3][n];
         for (int a = 0; a < 3; a++) {
             for (int i = 0; i < n; i++) {
-                // Six shears of size 0.02 |a| (|a| of order 1): rounding of order 1e-15 per step.
-                assertEquals(slow[a][i], fast[a][i], 1e-13, "axis " + a + " point " + i);
+                p[a][i] = random.nextDouble(-20, 20);
             }
         }
+        return p;
+    }
+
+    private static void assertClose(double[][] expected, double[][] actual, String what) {
+        for (int a = 0; a < 3; a++) {
+            for (int i = 0; i < expected[a].length; i++) {
+                // A handful of shears of size 0.02 |a| (|a| of order 1): rounding of order 1e-15 per shear.
+                assertEquals(expected[a][i], actual[a][i], 1e-13, what + ", axis " + a + " point " + i);
+            }
+        }
+    }
+
+    /**
+     * The vector kernel's shears, in turn forward and back (the Strang order) and at once, equal the reference
+     * kernel's to rounding, in both layouts; and the lane layout gives the shared layout's answer.
+     */
+    @Test
+    void vectorShearsMatchTheReferenceShears() {
+        ShearModeField f = realization();
+        f.setStepScale(0.01);
+        ShearKernel vector = new VectorShearKernel();
+        ShearKernel reference = new ReferenceShearKernel();
+        int n = 64 + 8 + 5; // two bundles, one single vector and five points one by one
+        double[][] fast = points(n);
+        double[][] slow = points(n);
+        vector.applyInTurn(f, 0, 2, fast[0], fast[1], fast[2], n);
+        vector.applyInTurn(f, 2, 0, fast[0], fast[1], fast[2], n);
+        reference.applyInTurn(f, 0, 2, slow[0], slow[1], slow[2], n);
+        reference.applyInTurn(f, 2, 0, slow[0], slow[1], slow[2], n);
+        assertClose(slow, fast, "shared, in turn");
+        vector.applyAtOnce(f, fast[0], fast[1], fast[2], n);
+        reference.applyAtOnce(f, slow[0], slow[1], slow[2], n);
+        assertClose(slow, fast, "shared, at once");
+
+        int width = 64;
+        ModeLanes lanes = new ModeLanes(3, 3, width);
+        for (int i = 0; i < width; i++) {
+            lanes.load(i, f);
+        }
+        lanes.setStepScale(0.01);
+        double[][] inLanes = points(width);
+        double[][] slowLanes = points(width);
+        double[][] shared = points(width);
+        vector.applyInTurn(lanes, 0, 2, inLanes[0], inLanes[1], inLanes[2]);
+        vector.applyInTurn(lanes, 2, 0, inLanes[0], inLanes[1], inLanes[2]);
+        reference.applyInTurn(lanes, 0, 2, slowLanes[0], slowLanes[1], slowLanes[2]);
+        reference.applyInTurn(lanes, 2, 0, slowLanes[0], slowLanes[1], slowLanes[2]);
+        reference.applyInTurn(f, 0, 2, shared[0], shared[1], shared[2], width);
+        reference.applyInTurn(f, 2, 0, shared[0], shared[1], shared[2], width);
+        assertClose(slowLanes, inLanes, "lanes, in turn");
+        assertClose(shared, inLanes, "lanes against the shared layout");
+        vector.applyAtOnce(lanes, inLanes[0], inLanes[1], inLanes[2]);
+        reference.applyAtOnce(lanes, slowLanes[0], slowLanes[1], slowLanes[2]);
+        assertClose(slowLanes, inLanes, "lanes, at once");
+    }
+
+    /** Two half steps of one shear are its full step: the shear leaves its own phase unchanged. */
+    @Test
+    void twoHalfShearsMakeTheFullShear() {
+        ShearModeField f = realization();
+        ShearKernel vector = new VectorShearKernel();
+        int n = 64;
+        double[][] halves = points(n);
+        double[][] full = points(n);
+        f.setStepScale(0.01);
+        vector.applyInTurn(f, 1, 1, halves[0], halves[1], halves[2], n);
+        vector.applyInTurn(f, 1, 1, halves[0], halves[1], halves[2], n);
+        f.setStepScale(0.02);
+        vector.applyInTurn(f, 1, 1, full[0], full[1], full[2], n);
+        assertClose(full, halves, "two half steps against one full step");
+    }
+
+    @Test
+    void vectorLaneKernelNeedsWholeBundles() {
+        ModeLanes lanes = new ModeLanes(3, 1, 40);
+        double[] p = new double[40];
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new VectorShearKernel().applyAtOnce(lanes, p, p, p));
+        assertTrue(e.getMessage().contains("multiple of"), e.getMessage());
     }
 }
