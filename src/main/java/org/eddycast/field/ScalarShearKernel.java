@@ -83,9 +83,11 @@ public class ScalarShearKernel implements ShearKernel {
                 double p = d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz;
                 double c = cosine(p);
                 double s = sine(p);
-                px += d[j + ModeLanes.AX * n] * c + d[j + ModeLanes.BX * n] * s;
-                py += d[j + ModeLanes.AY * n] * c + d[j + ModeLanes.BY * n] * s;
-                pz += d[j + ModeLanes.AZ * n] * c + d[j + ModeLanes.BZ * n] * s;
+                double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
+                double u2 = d[j + ModeLanes.ALPHA2 * n] * c + d[j + ModeLanes.BETA2 * n] * s;
+                px += u1 * d[j + ModeLanes.E1X * n] + u2 * d[j + ModeLanes.E2X * n];
+                py += u1 * d[j + ModeLanes.E1Y * n] + u2 * d[j + ModeLanes.E2Y * n];
+                pz += u1 * d[j + ModeLanes.E1Z * n] + u2 * d[j + ModeLanes.E2Z * n];
             }
             x[i] = px;
             y[i] = py;
@@ -107,9 +109,11 @@ public class ScalarShearKernel implements ShearKernel {
                         + d[j + ModeLanes.KZ * n] * z[i];
                 double c = cosine(p);
                 double s = sine(p);
-                dx += d[j + ModeLanes.AX * n] * c + d[j + ModeLanes.BX * n] * s;
-                dy += d[j + ModeLanes.AY * n] * c + d[j + ModeLanes.BY * n] * s;
-                dz += d[j + ModeLanes.AZ * n] * c + d[j + ModeLanes.BZ * n] * s;
+                double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
+                double u2 = d[j + ModeLanes.ALPHA2 * n] * c + d[j + ModeLanes.BETA2 * n] * s;
+                dx += u1 * d[j + ModeLanes.E1X * n] + u2 * d[j + ModeLanes.E2X * n];
+                dy += u1 * d[j + ModeLanes.E1Y * n] + u2 * d[j + ModeLanes.E2Y * n];
+                dz += u1 * d[j + ModeLanes.E1Z * n] + u2 * d[j + ModeLanes.E2Z * n];
             }
             x[i] += dx;
             y[i] += dy;
@@ -118,10 +122,14 @@ public class ScalarShearKernel implements ShearKernel {
     }
 
     @Override
+    public void advance(ShearModeField f, double[] normals, int offset) {
+        f.advanceAmplitudes(normals, offset);
+    }
+
+    @Override
     public void advance(ModeLanes f, int m, double[] normals) {
         int n = f.width();
         int o = m * ModeLanes.FIELDS * n;
-        double h = f.stepScale();
         double[] d = f.data;
         for (int i = 0; i < n; i++) {
             int j = o + i;
@@ -135,16 +143,6 @@ public class ScalarShearKernel implements ShearKernel {
             d[j + ModeLanes.BETA1 * n] = b1;
             d[j + ModeLanes.ALPHA2 * n] = a2;
             d[j + ModeLanes.BETA2 * n] = b2;
-            a1 *= h;
-            b1 *= h;
-            a2 *= h;
-            b2 *= h;
-            d[j + ModeLanes.AX * n] = a1 * d[j + ModeLanes.E1X * n] + a2 * d[j + ModeLanes.E2X * n];
-            d[j + ModeLanes.AY * n] = a1 * d[j + ModeLanes.E1Y * n] + a2 * d[j + ModeLanes.E2Y * n];
-            d[j + ModeLanes.AZ * n] = a1 * d[j + ModeLanes.E1Z * n] + a2 * d[j + ModeLanes.E2Z * n];
-            d[j + ModeLanes.BX * n] = b1 * d[j + ModeLanes.E1X * n] + b2 * d[j + ModeLanes.E2X * n];
-            d[j + ModeLanes.BY * n] = b1 * d[j + ModeLanes.E1Y * n] + b2 * d[j + ModeLanes.E2Y * n];
-            d[j + ModeLanes.BZ * n] = b1 * d[j + ModeLanes.E1Z * n] + b2 * d[j + ModeLanes.E2Z * n];
         }
     }
 

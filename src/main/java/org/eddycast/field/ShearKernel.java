@@ -35,6 +35,12 @@ public interface ShearKernel {
     void applyAtOnce(ModeLanes f, double[] x, double[] y, double[] z);
 
     /**
+     * Advances every coefficient of the shared realization by one prepared step and refreshes its amplitudes,
+     * as {@link ShearModeField#advanceAmplitudes} (four runs of one normal variate per mode from offset).
+     */
+    void advance(ShearModeField f, double[] normals, int offset);
+
+    /**
      * Advances mode m's coefficients in every lane by the exact Ornstein-Uhlenbeck transition with standard
      * normal variates {@code normals[0 .. 4 * width)} (alpha1, beta1, alpha2, beta2, each a run of width
      * values), then refreshes the lanes' scaled amplitudes of mode m.

@@ -38,20 +38,20 @@ public final class ShearModeField {
     final double[] bx;
     final double[] by;
     final double[] bz;
-    private final double[] e1x;
-    private final double[] e1y;
-    private final double[] e1z;
-    private final double[] e2x;
-    private final double[] e2y;
-    private final double[] e2z;
-    private final double[] alpha1;
-    private final double[] alpha2;
-    private final double[] beta1;
-    private final double[] beta2;
+    final double[] e1x;
+    final double[] e1y;
+    final double[] e1z;
+    final double[] e2x;
+    final double[] e2y;
+    final double[] e2z;
+    final double[] alpha1;
+    final double[] alpha2;
+    final double[] beta1;
+    final double[] beta2;
     private final double[] sigma;
     private final double[] correlationTime;
-    private final double[] decay;
-    private final double[] kick;
+    final double[] decay;
+    final double[] kick;
     private final boolean[] twoPolarizations;
     private boolean anyRandomInTime;
     private double stepScale = 1.0;
@@ -191,6 +191,11 @@ public final class ShearModeField {
             beta2[m] = decay[m] * beta2[m] + kick[m] * normals[b2 + m];
         }
         refreshAmplitudes();
+    }
+
+    /** True when some coefficient changes in time (the amplitude update has work to do). */
+    public boolean randomInTime() {
+        return anyRandomInTime;
     }
 
     /** The factor h the amplitude arrays carry. */

@@ -1,11 +1,15 @@
 package org.eddycast.field;
 
-import static org.eddycast.field.ModeLanes.AX;
-import static org.eddycast.field.ModeLanes.AY;
-import static org.eddycast.field.ModeLanes.AZ;
-import static org.eddycast.field.ModeLanes.BX;
-import static org.eddycast.field.ModeLanes.BY;
-import static org.eddycast.field.ModeLanes.BZ;
+import static org.eddycast.field.ModeLanes.ALPHA1;
+import static org.eddycast.field.ModeLanes.ALPHA2;
+import static org.eddycast.field.ModeLanes.BETA1;
+import static org.eddycast.field.ModeLanes.BETA2;
+import static org.eddycast.field.ModeLanes.E1X;
+import static org.eddycast.field.ModeLanes.E1Y;
+import static org.eddycast.field.ModeLanes.E1Z;
+import static org.eddycast.field.ModeLanes.E2X;
+import static org.eddycast.field.ModeLanes.E2Y;
+import static org.eddycast.field.ModeLanes.E2Z;
 import static org.eddycast.field.ModeLanes.KX;
 import static org.eddycast.field.ModeLanes.KY;
 import static org.eddycast.field.ModeLanes.KZ;
@@ -36,16 +40,18 @@ import jdk.incubator.vector.VectorSpecies;
 
 /**
  * The vector passes over particles that each carry their own realization ({@link ModeLanes}, particle i in
- * lane i): as {@link VectorSharedPasses}, with each lane's wavevector and amplitudes read from the lane layout
- * instead of broadcast. Bundles of four vectors in turn, one vector at once; the lane count must be a whole
- * number of bundles.
+ * lane i): as {@link VectorSharedPasses}, with each lane's wavevector, coefficients and (scaled) basis read
+ * from the lane layout instead of broadcast; the displacement is formed as u1 e1 + u2 e2 with
+ * u1 = alpha1 cos + beta1 sin and u2 = alpha2 cos + beta2 sin. Bundles of two vectors in turn (each vector's
+ * loads make the loop long enough to hide the latency with two), one vector at once; the lane count must be a
+ * whole number of bundles.
  */
 final class VectorLanePasses {
 
     private static final VectorSpecies<Double> SPECIES = VectorSinCos.SPECIES;
     private static final int LANES = SPECIES.length();
     /** Lanes per bundle. */
-    static final int BUNDLE = 4 * LANES;
+    static final int BUNDLE = 2 * LANES;
 
     private VectorLanePasses() {
     }
@@ -58,16 +64,10 @@ final class VectorLanePasses {
                              double[] z, int i) {
         DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
         DoubleVector x1 = DoubleVector.fromArray(SPECIES, x, i + LANES);
-        DoubleVector x2 = DoubleVector.fromArray(SPECIES, x, i + 2 * LANES);
-        DoubleVector x3 = DoubleVector.fromArray(SPECIES, x, i + 3 * LANES);
         DoubleVector y0 = DoubleVector.fromArray(SPECIES, y, i);
         DoubleVector y1 = DoubleVector.fromArray(SPECIES, y, i + LANES);
-        DoubleVector y2 = DoubleVector.fromArray(SPECIES, y, i + 2 * LANES);
-        DoubleVector y3 = DoubleVector.fromArray(SPECIES, y, i + 3 * LANES);
         DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
         DoubleVector z1 = DoubleVector.fromArray(SPECIES, z, i + LANES);
-        DoubleVector z2 = DoubleVector.fromArray(SPECIES, z, i + 2 * LANES);
-        DoubleVector z3 = DoubleVector.fromArray(SPECIES, z, i + 3 * LANES);
         for (int m = first; m != stop; m += direction) {
             int o = m * ModeLanes.FIELDS * width + i;
             DoubleVector p0 = z0.fma(DoubleVector.fromArray(SPECIES, d, o + KZ * width),
@@ -76,12 +76,6 @@ final class VectorLanePasses {
             DoubleVector p1 = z1.fma(DoubleVector.fromArray(SPECIES, d, o + LANES + KZ * width),
                     y1.fma(DoubleVector.fromArray(SPECIES, d, o + LANES + KY * width),
                     x1.mul(DoubleVector.fromArray(SPECIES, d, o + LANES + KX * width))));
-            DoubleVector p2 = z2.fma(DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + KZ * width),
-                    y2.fma(DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + KY * width),
-                    x2.mul(DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + KX * width))));
-            DoubleVector p3 = z3.fma(DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + KZ * width),
-                    y3.fma(DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + KY * width),
-                    x3.mul(DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + KX * width))));
             DoubleVector t0 = p0.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
             DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0.mul(HALF)));
             DoubleVector w0 = h0.mul(h0);
@@ -96,57 +90,33 @@ final class VectorLanePasses {
             DoubleVector ch1 = w1.fma(C7, C6).fma(w1, C5).fma(w1, C4).fma(w1, C3).fma(w1, C2).fma(w1, C1).fma(w1, C0);
             DoubleVector s1 = sh1.add(sh1).mul(ch1);
             DoubleVector c1 = ch1.add(ch1).fma(ch1, MINUS_ONE);
-            DoubleVector t2 = p2.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h2 = t2.fma(MINUS_PI_LO, t2.fma(MINUS_PI_HI, p2.mul(HALF)));
-            DoubleVector w2 = h2.mul(h2);
-            DoubleVector sh2 = w2.fma(S6, S5).fma(w2, S4).fma(w2, S3).fma(w2, S2).fma(w2, S1).fma(w2, S0).mul(h2);
-            DoubleVector ch2 = w2.fma(C7, C6).fma(w2, C5).fma(w2, C4).fma(w2, C3).fma(w2, C2).fma(w2, C1).fma(w2, C0);
-            DoubleVector s2 = sh2.add(sh2).mul(ch2);
-            DoubleVector c2 = ch2.add(ch2).fma(ch2, MINUS_ONE);
-            DoubleVector t3 = p3.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h3 = t3.fma(MINUS_PI_LO, t3.fma(MINUS_PI_HI, p3.mul(HALF)));
-            DoubleVector w3 = h3.mul(h3);
-            DoubleVector sh3 = w3.fma(S6, S5).fma(w3, S4).fma(w3, S3).fma(w3, S2).fma(w3, S1).fma(w3, S0).mul(h3);
-            DoubleVector ch3 = w3.fma(C7, C6).fma(w3, C5).fma(w3, C4).fma(w3, C3).fma(w3, C2).fma(w3, C1).fma(w3, C0);
-            DoubleVector s3 = sh3.add(sh3).mul(ch3);
-            DoubleVector c3 = ch3.add(ch3).fma(ch3, MINUS_ONE);
-            x0 = DoubleVector.fromArray(SPECIES, d, o + AX * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BX * width).fma(s0, x0));
-            x1 = DoubleVector.fromArray(SPECIES, d, o + LANES + AX * width).fma(c1,
-                    DoubleVector.fromArray(SPECIES, d, o + LANES + BX * width).fma(s1, x1));
-            x2 = DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + AX * width).fma(c2,
-                    DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + BX * width).fma(s2, x2));
-            x3 = DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + AX * width).fma(c3,
-                    DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + BX * width).fma(s3, x3));
-            y0 = DoubleVector.fromArray(SPECIES, d, o + AY * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BY * width).fma(s0, y0));
-            y1 = DoubleVector.fromArray(SPECIES, d, o + LANES + AY * width).fma(c1,
-                    DoubleVector.fromArray(SPECIES, d, o + LANES + BY * width).fma(s1, y1));
-            y2 = DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + AY * width).fma(c2,
-                    DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + BY * width).fma(s2, y2));
-            y3 = DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + AY * width).fma(c3,
-                    DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + BY * width).fma(s3, y3));
-            z0 = DoubleVector.fromArray(SPECIES, d, o + AZ * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BZ * width).fma(s0, z0));
-            z1 = DoubleVector.fromArray(SPECIES, d, o + LANES + AZ * width).fma(c1,
-                    DoubleVector.fromArray(SPECIES, d, o + LANES + BZ * width).fma(s1, z1));
-            z2 = DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + AZ * width).fma(c2,
-                    DoubleVector.fromArray(SPECIES, d, o + 2 * LANES + BZ * width).fma(s2, z2));
-            z3 = DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + AZ * width).fma(c3,
-                    DoubleVector.fromArray(SPECIES, d, o + 3 * LANES + BZ * width).fma(s3, z3));
+            DoubleVector u10 = DoubleVector.fromArray(SPECIES, d, o + ALPHA1 * width).fma(c0,
+                    DoubleVector.fromArray(SPECIES, d, o + BETA1 * width).mul(s0));
+            DoubleVector u20 = DoubleVector.fromArray(SPECIES, d, o + ALPHA2 * width).fma(c0,
+                    DoubleVector.fromArray(SPECIES, d, o + BETA2 * width).mul(s0));
+            DoubleVector u11 = DoubleVector.fromArray(SPECIES, d, o + LANES + ALPHA1 * width).fma(c1,
+                    DoubleVector.fromArray(SPECIES, d, o + LANES + BETA1 * width).mul(s1));
+            DoubleVector u21 = DoubleVector.fromArray(SPECIES, d, o + LANES + ALPHA2 * width).fma(c1,
+                    DoubleVector.fromArray(SPECIES, d, o + LANES + BETA2 * width).mul(s1));
+            x0 = DoubleVector.fromArray(SPECIES, d, o + E1X * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2X * width).fma(u20, x0));
+            x1 = DoubleVector.fromArray(SPECIES, d, o + LANES + E1X * width).fma(u11,
+                    DoubleVector.fromArray(SPECIES, d, o + LANES + E2X * width).fma(u21, x1));
+            y0 = DoubleVector.fromArray(SPECIES, d, o + E1Y * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2Y * width).fma(u20, y0));
+            y1 = DoubleVector.fromArray(SPECIES, d, o + LANES + E1Y * width).fma(u11,
+                    DoubleVector.fromArray(SPECIES, d, o + LANES + E2Y * width).fma(u21, y1));
+            z0 = DoubleVector.fromArray(SPECIES, d, o + E1Z * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2Z * width).fma(u20, z0));
+            z1 = DoubleVector.fromArray(SPECIES, d, o + LANES + E1Z * width).fma(u11,
+                    DoubleVector.fromArray(SPECIES, d, o + LANES + E2Z * width).fma(u21, z1));
         }
         x0.intoArray(x, i);
         x1.intoArray(x, i + LANES);
-        x2.intoArray(x, i + 2 * LANES);
-        x3.intoArray(x, i + 3 * LANES);
         y0.intoArray(y, i);
         y1.intoArray(y, i + LANES);
-        y2.intoArray(y, i + 2 * LANES);
-        y3.intoArray(y, i + 3 * LANES);
         z0.intoArray(z, i);
         z1.intoArray(z, i + LANES);
-        z2.intoArray(z, i + 2 * LANES);
-        z3.intoArray(z, i + 3 * LANES);
     }
 
     /** The sum of modes 0 .. end / (FIELDS * width) at the starting point, added, for the lanes of one vector. */
@@ -168,12 +138,16 @@ final class VectorLanePasses {
             DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
             DoubleVector s0 = sh0.add(sh0).mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
-            dx0 = DoubleVector.fromArray(SPECIES, d, o + AX * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BX * width).fma(s0, dx0));
-            dy0 = DoubleVector.fromArray(SPECIES, d, o + AY * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BY * width).fma(s0, dy0));
-            dz0 = DoubleVector.fromArray(SPECIES, d, o + AZ * width).fma(c0,
-                    DoubleVector.fromArray(SPECIES, d, o + BZ * width).fma(s0, dz0));
+            DoubleVector u10 = DoubleVector.fromArray(SPECIES, d, o + ALPHA1 * width).fma(c0,
+                    DoubleVector.fromArray(SPECIES, d, o + BETA1 * width).mul(s0));
+            DoubleVector u20 = DoubleVector.fromArray(SPECIES, d, o + ALPHA2 * width).fma(c0,
+                    DoubleVector.fromArray(SPECIES, d, o + BETA2 * width).mul(s0));
+            dx0 = DoubleVector.fromArray(SPECIES, d, o + E1X * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2X * width).fma(u20, dx0));
+            dy0 = DoubleVector.fromArray(SPECIES, d, o + E1Y * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2Y * width).fma(u20, dy0));
+            dz0 = DoubleVector.fromArray(SPECIES, d, o + E1Z * width).fma(u10,
+                    DoubleVector.fromArray(SPECIES, d, o + E2Z * width).fma(u20, dz0));
         }
         x0.add(dx0).intoArray(x, i);
         y0.add(dy0).intoArray(y, i);

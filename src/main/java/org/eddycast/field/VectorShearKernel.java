@@ -75,44 +75,69 @@ public final class VectorShearKernel implements ShearKernel {
         return width;
     }
 
+    /** {@link ShearModeField#advanceAmplitudes} in vector form, modes in the lanes. */
+    @Override
+    public void advance(ShearModeField f, double[] normals, int offset) {
+        int modes = f.modes();
+        if (!f.randomInTime()) {
+            return;
+        }
+        if (modes % LANES != 0) {
+            f.advanceAmplitudes(normals, offset);
+            return;
+        }
+        DoubleVector h = DoubleVector.broadcast(SPECIES, f.stepScale());
+        for (int m = 0; m < modes; m += LANES) {
+            DoubleVector rho = DoubleVector.fromArray(SPECIES, f.decay, m);
+            DoubleVector k = DoubleVector.fromArray(SPECIES, f.kick, m);
+            DoubleVector a1 = k.fma(DoubleVector.fromArray(SPECIES, normals, offset + m),
+                    rho.mul(DoubleVector.fromArray(SPECIES, f.alpha1, m)));
+            DoubleVector b1 = k.fma(DoubleVector.fromArray(SPECIES, normals, offset + modes + m),
+                    rho.mul(DoubleVector.fromArray(SPECIES, f.beta1, m)));
+            DoubleVector a2 = k.fma(DoubleVector.fromArray(SPECIES, normals, offset + 2 * modes + m),
+                    rho.mul(DoubleVector.fromArray(SPECIES, f.alpha2, m)));
+            DoubleVector b2 = k.fma(DoubleVector.fromArray(SPECIES, normals, offset + 3 * modes + m),
+                    rho.mul(DoubleVector.fromArray(SPECIES, f.beta2, m)));
+            a1.intoArray(f.alpha1, m);
+            b1.intoArray(f.beta1, m);
+            a2.intoArray(f.alpha2, m);
+            b2.intoArray(f.beta2, m);
+            DoubleVector e1x = DoubleVector.fromArray(SPECIES, f.e1x, m);
+            DoubleVector e1y = DoubleVector.fromArray(SPECIES, f.e1y, m);
+            DoubleVector e1z = DoubleVector.fromArray(SPECIES, f.e1z, m);
+            DoubleVector e2x = DoubleVector.fromArray(SPECIES, f.e2x, m);
+            DoubleVector e2y = DoubleVector.fromArray(SPECIES, f.e2y, m);
+            DoubleVector e2z = DoubleVector.fromArray(SPECIES, f.e2z, m);
+            a1.fma(e1x, a2.mul(e2x)).mul(h).intoArray(f.ax, m);
+            a1.fma(e1y, a2.mul(e2y)).mul(h).intoArray(f.ay, m);
+            a1.fma(e1z, a2.mul(e2z)).mul(h).intoArray(f.az, m);
+            b1.fma(e1x, b2.mul(e2x)).mul(h).intoArray(f.bx, m);
+            b1.fma(e1y, b2.mul(e2y)).mul(h).intoArray(f.by, m);
+            b1.fma(e1z, b2.mul(e2z)).mul(h).intoArray(f.bz, m);
+        }
+    }
+
     @Override
     public void advance(ModeLanes f, int m, double[] normals) {
         int n = f.width();
         int o = m * ModeLanes.FIELDS * n;
         double[] d = f.data;
-        DoubleVector h = DoubleVector.broadcast(SPECIES, f.stepScale());
         for (int i = 0; i < n; i += LANES) {
             int j = o + i;
             DoubleVector rho = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.DECAY * n);
             DoubleVector k = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.KICK * n);
-            DoubleVector a1 = k.mul(DoubleVector.fromArray(SPECIES, normals, i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA1 * n)));
-            DoubleVector b1 = k.mul(DoubleVector.fromArray(SPECIES, normals, n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA1 * n)));
-            DoubleVector a2 = k.mul(DoubleVector.fromArray(SPECIES, normals, 2 * n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA2 * n)));
-            DoubleVector b2 = k.mul(DoubleVector.fromArray(SPECIES, normals, 3 * n + i))
-                    .add(rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA2 * n)));
-            a1.intoArray(d, j + ModeLanes.ALPHA1 * n);
-            b1.intoArray(d, j + ModeLanes.BETA1 * n);
-            a2.intoArray(d, j + ModeLanes.ALPHA2 * n);
-            b2.intoArray(d, j + ModeLanes.BETA2 * n);
-            a1 = a1.mul(h);
-            b1 = b1.mul(h);
-            a2 = a2.mul(h);
-            b2 = b2.mul(h);
-            DoubleVector e1x = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1X * n);
-            DoubleVector e1y = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1Y * n);
-            DoubleVector e1z = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E1Z * n);
-            DoubleVector e2x = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2X * n);
-            DoubleVector e2y = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2Y * n);
-            DoubleVector e2z = DoubleVector.fromArray(SPECIES, d, j + ModeLanes.E2Z * n);
-            a1.fma(e1x, a2.mul(e2x)).intoArray(d, j + ModeLanes.AX * n);
-            a1.fma(e1y, a2.mul(e2y)).intoArray(d, j + ModeLanes.AY * n);
-            a1.fma(e1z, a2.mul(e2z)).intoArray(d, j + ModeLanes.AZ * n);
-            b1.fma(e1x, b2.mul(e2x)).intoArray(d, j + ModeLanes.BX * n);
-            b1.fma(e1y, b2.mul(e2y)).intoArray(d, j + ModeLanes.BY * n);
-            b1.fma(e1z, b2.mul(e2z)).intoArray(d, j + ModeLanes.BZ * n);
+            k.fma(DoubleVector.fromArray(SPECIES, normals, i),
+                    rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA1 * n)))
+                    .intoArray(d, j + ModeLanes.ALPHA1 * n);
+            k.fma(DoubleVector.fromArray(SPECIES, normals, n + i),
+                    rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA1 * n)))
+                    .intoArray(d, j + ModeLanes.BETA1 * n);
+            k.fma(DoubleVector.fromArray(SPECIES, normals, 2 * n + i),
+                    rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.ALPHA2 * n)))
+                    .intoArray(d, j + ModeLanes.ALPHA2 * n);
+            k.fma(DoubleVector.fromArray(SPECIES, normals, 3 * n + i),
+                    rho.mul(DoubleVector.fromArray(SPECIES, d, j + ModeLanes.BETA2 * n)))
+                    .intoArray(d, j + ModeLanes.BETA2 * n);
         }
     }
 

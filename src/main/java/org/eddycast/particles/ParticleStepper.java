@@ -61,7 +61,7 @@ public final class ParticleStepper {
         double[] xi = normals(need);
         source.fill(xi, need);
         kickAll(p, n, xi, field.dimensions());
-        field.advanceAmplitudes(xi, 3 * n);
+        kernel.advance(field, xi, 3 * n);
     }
 
     /** Advances every particle of the block, each in its lane's own realization, and the lanes by one step. */
