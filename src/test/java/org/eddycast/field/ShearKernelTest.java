@@ -179,6 +179,55 @@ class ShearKernelTest {
         assertClose(full, halves, "two half steps against one full step");
     }
 
+    /**
+     * The amplitude update in vector form equals the field's own scalar update to rounding, with the step scale
+     * carried into the amplitudes.
+     */
+    @Test
+    void vectorAmplitudeUpdateMatchesTheScalarUpdate() {
+        int modes = 16;
+        ShearModeField vectorField = new ShearModeField(3, modes);
+        ShearModeField scalarField = new ShearModeField(3, modes);
+        RandomFourierModel model = new RandomFourierModel(
+                new SpectrumTable(new PowerLawBand(-5.0 / 3.0, 16), 3, modes), 1.0, "test");
+        model.realize(vectorField, RandomGeneratorFactory.of("L64X128MixRandom").create(9));
+        model.realize(scalarField, RandomGeneratorFactory.of("L64X128MixRandom").create(9));
+        for (ShearModeField f : new ShearModeField[] {vectorField, scalarField}) {
+            f.prepareStep(0.02);
+            f.setStepScale(0.02);
+        }
+        double[] normals = new double[3 + 4 * modes];
+        SplittableRandom random = new SplittableRandom(10);
+        for (int i = 0; i < normals.length; i++) {
+            normals[i] = random.nextGaussian();
+        }
+        new VectorShearKernel().advance(vectorField, normals, 3);
+        new ScalarShearKernel().advance(scalarField, normals, 3);
+        double[] a = new double[3];
+        double[] b = new double[3];
+        double[] expectedA = new double[3];
+        double[] expectedB = new double[3];
+        boolean changed = false;
+        for (int m = 0; m < modes; m++) {
+            vectorField.amplitudes(m, a, b);
+            scalarField.amplitudes(m, expectedA, expectedB);
+            for (int c = 0; c < 3; c++) {
+                assertEquals(expectedA[c], a[c], 1e-14, "mode " + m + " a[" + c + "]");
+                assertEquals(expectedB[c], b[c], 1e-14, "mode " + m + " b[" + c + "]");
+            }
+            assertEquals(expectedA[0] * 0.02, vectorField.ax[m], 1e-15, "stored amplitudes carry the step scale");
+        }
+        ShearModeField fresh = new ShearModeField(3, modes);
+        model.realize(fresh, RandomGeneratorFactory.of("L64X128MixRandom").create(9));
+        fresh.prepareStep(0.02);
+        for (int m = 0; m < modes; m++) {
+            fresh.amplitudes(m, expectedA, expectedB);
+            vectorField.amplitudes(m, a, b);
+            changed |= Math.abs(a[0] - expectedA[0]) > 1e-6;
+        }
+        assertTrue(changed, "the update must move the amplitudes");
+    }
+
     @Test
     void vectorLaneKernelNeedsWholeBundles() {
         ModeLanes lanes = new ModeLanes(3, 1, 40);
