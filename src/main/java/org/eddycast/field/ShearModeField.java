@@ -32,6 +32,10 @@ public final class ShearModeField {
     final double[] kx;
     final double[] ky;
     final double[] kz;
+    /** Half the wavevector: the vector kernel's phase is then the half angle its sine and cosine start from. */
+    final double[] halfKx;
+    final double[] halfKy;
+    final double[] halfKz;
     final double[] ax;
     final double[] ay;
     final double[] az;
@@ -68,6 +72,9 @@ public final class ShearModeField {
         kx = new double[modes];
         ky = new double[modes];
         kz = new double[modes];
+        halfKx = new double[modes];
+        halfKy = new double[modes];
+        halfKz = new double[modes];
         ax = new double[modes];
         ay = new double[modes];
         az = new double[modes];
@@ -110,6 +117,9 @@ public final class ShearModeField {
         kx[m] = k[0];
         ky[m] = k[1];
         kz[m] = dimensions == 3 ? k[2] : 0.0;
+        halfKx[m] = 0.5 * kx[m];
+        halfKy[m] = 0.5 * ky[m];
+        halfKz[m] = 0.5 * kz[m];
         e1x[m] = e1[0];
         e1y[m] = e1[1];
         e1z[m] = dimensions == 3 ? e1[2] : 0.0;

@@ -29,6 +29,7 @@ public final class VectorSinCos {
     /** Longs in a vector of the same shape, for the bit operations. */
     public static final VectorSpecies<Long> LONGS = SPECIES.withLanes(long.class);
     public static final DoubleVector ONE_OVER_TWO_PI = DoubleVector.broadcast(SPECIES, FastSinCos.ONE_OVER_TWO_PI);
+    public static final DoubleVector ONE_OVER_PI = DoubleVector.broadcast(SPECIES, 1.0 / Math.PI);
     public static final DoubleVector HALF = DoubleVector.broadcast(SPECIES, 0.5);
     public static final DoubleVector MINUS_ONE = DoubleVector.broadcast(SPECIES, -1.0);
     /** 1.5 * 2^52. */

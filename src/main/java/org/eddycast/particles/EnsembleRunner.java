@@ -23,8 +23,8 @@ import org.eddycast.stats.DisplacementMoments;
  * all its steps while it sits in cache and leaves only its curve of mean-square displacements at the record
  * times, so memory does not grow with the number of steps or particles. Shared realizations run one group at
  * a time (the realization and the group's positions: a few kilobytes); with one realization per particle
- * (group size 1) the whole block runs at once, particle i in lane i of a {@link ModeLanes} (21 doubles per
- * mode and particle: about 690 kB for 64 modes and 64 particles, in the core's second-level cache).
+ * (group size 1) the whole block runs at once, particle i in lane i of a {@link ModeLanes} (15 doubles per
+ * mode and particle: about 490 kB for 64 modes and 64 particles, in the core's second-level cache).
  *
  * <p>Memory bound: per worker thread one block's workspace (above) and its curve (axes x records doubles);
  * for the run, the moments (axes x records^2 doubles, about 0.45 MB for 3 axes and the schedule's ~136
