@@ -83,7 +83,7 @@ public final class ModeLanes {
         }
     }
 
-    /** The factor h the stored amplitudes carry. */
+    /** The factor h the stored basis vectors carry. */
     public double stepScale() {
         return stepScale;
     }

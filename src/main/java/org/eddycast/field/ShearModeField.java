@@ -187,7 +187,7 @@ public final class ShearModeField {
         int b1 = offset + modes;
         int a2 = offset + 2 * modes;
         int b2 = offset + 3 * modes;
-        // Plain loops over contiguous arrays, which the JIT vectorizes.
+        // One run of variates per coefficient: the layout the vector form of this update reads.
         for (int m = 0; m < modes; m++) {
             alpha1[m] = decay[m] * alpha1[m] + kick[m] * normals[a1 + m];
         }
