@@ -22,18 +22,26 @@ public final class VectorShearKernel implements ShearKernel {
 
     @Override
     public void applyInTurn(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int n) {
-        int direction = last >= first ? 1 : -1;
-        int stop = last + direction;
+        boolean forward = last >= first;
         int bundled = n - n % VectorSharedPasses.BUNDLE;
         for (int i = 0; i < bundled; i += VectorSharedPasses.BUNDLE) {
-            VectorSharedPasses.inTurnBundle(f, first, stop, direction, x, y, z, i);
+            if (forward) {
+                VectorSharedPasses.forwardBundle(f, first, last, x, y, z, i);
+            } else {
+                VectorSharedPasses.backwardBundle(f, first, last, x, y, z, i);
+            }
         }
         int whole = SPECIES.loopBound(n);
         for (int i = bundled; i < whole; i += LANES) {
-            VectorSharedPasses.inTurnVector(f, first, stop, direction, x, y, z, i);
+            if (forward) {
+                VectorSharedPasses.forwardVector(f, first, last, x, y, z, i);
+            } else {
+                VectorSharedPasses.backwardVector(f, first, last, x, y, z, i);
+            }
         }
+        int direction = forward ? 1 : -1;
         for (int i = whole; i < n; i++) {
-            tail.inTurnPoint(f, first, stop, direction, x, y, z, i);
+            tail.inTurnPoint(f, first, last + direction, direction, x, y, z, i);
         }
     }
 
