@@ -14,8 +14,9 @@ import org.eddycast.field.ShearModeField;
  * Jacobian determinant, so volume is preserved to round-off (McLachlan and Quispel 2002, "Splitting methods",
  * Acta Numerica 11:341-434). Lie applies the modes once in order (first order); Strang applies them forward
  * with half steps and back with half steps, the middle mode's two halves making one full step (second order
- * in the drift, 2M shear evaluations per step). Euler-Maruyama evaluates the full velocity at the start point and is kept
- * as a baseline (Kloeden and Platen 1992, Numerical Solution of Stochastic Differential Equations, Springer).
+ * in the drift, 2M shear evaluations per step). Euler-Maruyama evaluates the full velocity at the start point
+ * and is kept as a baseline (Kloeden and Platen 1992, Numerical Solution of Stochastic Differential Equations,
+ * Springer).
  */
 public enum Integrator {
 

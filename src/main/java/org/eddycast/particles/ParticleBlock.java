@@ -1,7 +1,8 @@
 package org.eddycast.particles;
 
 /**
- * Positions of a block of particles as structure-of-arrays doubles, and their starting points. Owned by one thread; nothing is allocated after construction.
+ * Positions of a block of particles as structure-of-arrays doubles, and their starting points. Owned by one
+ * thread; nothing is allocated after construction.
  */
 public final class ParticleBlock {
 
