@@ -30,10 +30,9 @@ import jdk.incubator.vector.VectorSpecies;
  * registers. Bundles of four vectors go through the shears in turn side by side, because one vector alone
  * would wait on each shear's result (about 70 cycles of dependent arithmetic) before starting the next; four
  * keep the arithmetic units busy. Shears applied at once do not wait on each other, so there one vector at a
- * time is enough. The forward and backward sweeps are separate counted loops, so that the compiler hoists the
- * array bounds checks out of them. The phase is taken with the field's half wavevectors, which gives the half
- * angle the sine and cosine start from without a multiplication. Every loop is one flat method (see
- * {@link VectorSinCos} for why and for the sine and cosine).
+ * time is enough. The phase is taken with the field's half wavevectors, which gives the half angle the sine
+ * and cosine start from without a multiplication. Every loop is one flat method (see {@link VectorSinCos} for why and for the sine and
+ * cosine).
  */
 final class VectorSharedPasses {
 
@@ -45,8 +44,9 @@ final class VectorSharedPasses {
     private VectorSharedPasses() {
     }
 
-    /** Modes first, first + 1, ..., last, in turn, for points i .. i + BUNDLE. */
-    static void forwardBundle(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int i) {
+    /** Modes first, first + direction, ... up to but not including stop, in turn, for points i .. i + BUNDLE. */
+    static void inTurnBundle(ShearModeField f, int first, int stop, int direction, double[] x, double[] y,
+                             double[] z, int i) {
         DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
         DoubleVector x1 = DoubleVector.fromArray(SPECIES, x, i + LANES);
         DoubleVector x2 = DoubleVector.fromArray(SPECIES, x, i + 2 * LANES);
@@ -68,7 +68,7 @@ final class VectorSharedPasses {
         double[] bx = f.bx;
         double[] by = f.by;
         double[] bz = f.bz;
-        for (int m = first; m <= last; m++) {
+        for (int m = first; m != stop; m += direction) {
             DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
@@ -137,100 +137,9 @@ final class VectorSharedPasses {
         z3.intoArray(z, i + 3 * LANES);
     }
 
-    /** Modes first, first - 1, ..., last, in turn, for points i .. i + BUNDLE. */
-    static void backwardBundle(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int i) {
-        DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
-        DoubleVector x1 = DoubleVector.fromArray(SPECIES, x, i + LANES);
-        DoubleVector x2 = DoubleVector.fromArray(SPECIES, x, i + 2 * LANES);
-        DoubleVector x3 = DoubleVector.fromArray(SPECIES, x, i + 3 * LANES);
-        DoubleVector y0 = DoubleVector.fromArray(SPECIES, y, i);
-        DoubleVector y1 = DoubleVector.fromArray(SPECIES, y, i + LANES);
-        DoubleVector y2 = DoubleVector.fromArray(SPECIES, y, i + 2 * LANES);
-        DoubleVector y3 = DoubleVector.fromArray(SPECIES, y, i + 3 * LANES);
-        DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
-        DoubleVector z1 = DoubleVector.fromArray(SPECIES, z, i + LANES);
-        DoubleVector z2 = DoubleVector.fromArray(SPECIES, z, i + 2 * LANES);
-        DoubleVector z3 = DoubleVector.fromArray(SPECIES, z, i + 3 * LANES);
-        double[] kx = f.halfKx;
-        double[] ky = f.halfKy;
-        double[] kz = f.halfKz;
-        double[] ax = f.ax;
-        double[] ay = f.ay;
-        double[] az = f.az;
-        double[] bx = f.bx;
-        double[] by = f.by;
-        double[] bz = f.bz;
-        for (int m = first; m >= last; m--) {
-            DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
-            DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
-            DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
-            DoubleVector p0 = z0.fma(kzm, y0.fma(kym, x0.mul(kxm)));
-            DoubleVector p1 = z1.fma(kzm, y1.fma(kym, x1.mul(kxm)));
-            DoubleVector p2 = z2.fma(kzm, y2.fma(kym, x2.mul(kxm)));
-            DoubleVector p3 = z3.fma(kzm, y3.fma(kym, x3.mul(kxm)));
-            DoubleVector t0 = p0.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
-            DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
-            DoubleVector t1 = p1.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h1 = t1.fma(MINUS_PI_LO, t1.fma(MINUS_PI_HI, p1));
-            DoubleVector w1 = h1.mul(h1);
-            DoubleVector sh1 = w1.fma(S6, S5).fma(w1, S4).fma(w1, S3).fma(w1, S2).fma(w1, S1).fma(w1, S0).mul(h1);
-            DoubleVector ch1 = w1.fma(C7, C6).fma(w1, C5).fma(w1, C4).fma(w1, C3).fma(w1, C2).fma(w1, C1).fma(w1, C0);
-            DoubleVector s1 = sh1.add(sh1).mul(ch1);
-            DoubleVector c1 = ch1.add(ch1).fma(ch1, MINUS_ONE);
-            DoubleVector t2 = p2.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h2 = t2.fma(MINUS_PI_LO, t2.fma(MINUS_PI_HI, p2));
-            DoubleVector w2 = h2.mul(h2);
-            DoubleVector sh2 = w2.fma(S6, S5).fma(w2, S4).fma(w2, S3).fma(w2, S2).fma(w2, S1).fma(w2, S0).mul(h2);
-            DoubleVector ch2 = w2.fma(C7, C6).fma(w2, C5).fma(w2, C4).fma(w2, C3).fma(w2, C2).fma(w2, C1).fma(w2, C0);
-            DoubleVector s2 = sh2.add(sh2).mul(ch2);
-            DoubleVector c2 = ch2.add(ch2).fma(ch2, MINUS_ONE);
-            DoubleVector t3 = p3.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h3 = t3.fma(MINUS_PI_LO, t3.fma(MINUS_PI_HI, p3));
-            DoubleVector w3 = h3.mul(h3);
-            DoubleVector sh3 = w3.fma(S6, S5).fma(w3, S4).fma(w3, S3).fma(w3, S2).fma(w3, S1).fma(w3, S0).mul(h3);
-            DoubleVector ch3 = w3.fma(C7, C6).fma(w3, C5).fma(w3, C4).fma(w3, C3).fma(w3, C2).fma(w3, C1).fma(w3, C0);
-            DoubleVector s3 = sh3.add(sh3).mul(ch3);
-            DoubleVector c3 = ch3.add(ch3).fma(ch3, MINUS_ONE);
-            DoubleVector axm = DoubleVector.broadcast(SPECIES, ax[m]);
-            DoubleVector bxm = DoubleVector.broadcast(SPECIES, bx[m]);
-            x0 = axm.fma(c0, bxm.fma(s0, x0));
-            x1 = axm.fma(c1, bxm.fma(s1, x1));
-            x2 = axm.fma(c2, bxm.fma(s2, x2));
-            x3 = axm.fma(c3, bxm.fma(s3, x3));
-            DoubleVector aym = DoubleVector.broadcast(SPECIES, ay[m]);
-            DoubleVector bym = DoubleVector.broadcast(SPECIES, by[m]);
-            y0 = aym.fma(c0, bym.fma(s0, y0));
-            y1 = aym.fma(c1, bym.fma(s1, y1));
-            y2 = aym.fma(c2, bym.fma(s2, y2));
-            y3 = aym.fma(c3, bym.fma(s3, y3));
-            DoubleVector azm = DoubleVector.broadcast(SPECIES, az[m]);
-            DoubleVector bzm = DoubleVector.broadcast(SPECIES, bz[m]);
-            z0 = azm.fma(c0, bzm.fma(s0, z0));
-            z1 = azm.fma(c1, bzm.fma(s1, z1));
-            z2 = azm.fma(c2, bzm.fma(s2, z2));
-            z3 = azm.fma(c3, bzm.fma(s3, z3));
-        }
-        x0.intoArray(x, i);
-        x1.intoArray(x, i + LANES);
-        x2.intoArray(x, i + 2 * LANES);
-        x3.intoArray(x, i + 3 * LANES);
-        y0.intoArray(y, i);
-        y1.intoArray(y, i + LANES);
-        y2.intoArray(y, i + 2 * LANES);
-        y3.intoArray(y, i + 3 * LANES);
-        z0.intoArray(z, i);
-        z1.intoArray(z, i + LANES);
-        z2.intoArray(z, i + 2 * LANES);
-        z3.intoArray(z, i + 3 * LANES);
-    }
-
-    /** As {@link #forwardBundle} for the points of one vector from i. */
-    static void forwardVector(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int i) {
+    /** As {@link #inTurnBundle} for the points of one vector from i. */
+    static void inTurnVector(ShearModeField f, int first, int stop, int direction, double[] x, double[] y,
+                             double[] z, int i) {
         DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
         DoubleVector y0 = DoubleVector.fromArray(SPECIES, y, i);
         DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
@@ -243,48 +152,7 @@ final class VectorSharedPasses {
         double[] bx = f.bx;
         double[] by = f.by;
         double[] bz = f.bz;
-        for (int m = first; m <= last; m++) {
-            DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
-            DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
-            DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
-            DoubleVector p0 = z0.fma(kzm, y0.fma(kym, x0.mul(kxm)));
-            DoubleVector t0 = p0.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
-            DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
-            DoubleVector axm = DoubleVector.broadcast(SPECIES, ax[m]);
-            DoubleVector bxm = DoubleVector.broadcast(SPECIES, bx[m]);
-            x0 = axm.fma(c0, bxm.fma(s0, x0));
-            DoubleVector aym = DoubleVector.broadcast(SPECIES, ay[m]);
-            DoubleVector bym = DoubleVector.broadcast(SPECIES, by[m]);
-            y0 = aym.fma(c0, bym.fma(s0, y0));
-            DoubleVector azm = DoubleVector.broadcast(SPECIES, az[m]);
-            DoubleVector bzm = DoubleVector.broadcast(SPECIES, bz[m]);
-            z0 = azm.fma(c0, bzm.fma(s0, z0));
-        }
-        x0.intoArray(x, i);
-        y0.intoArray(y, i);
-        z0.intoArray(z, i);
-    }
-
-    /** As {@link #backwardBundle} for the points of one vector from i. */
-    static void backwardVector(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int i) {
-        DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
-        DoubleVector y0 = DoubleVector.fromArray(SPECIES, y, i);
-        DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
-        double[] kx = f.halfKx;
-        double[] ky = f.halfKy;
-        double[] kz = f.halfKz;
-        double[] ax = f.ax;
-        double[] ay = f.ay;
-        double[] az = f.az;
-        double[] bx = f.bx;
-        double[] by = f.by;
-        double[] bz = f.bz;
-        for (int m = first; m >= last; m--) {
+        for (int m = first; m != stop; m += direction) {
             DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);

@@ -22,26 +22,18 @@ public final class VectorShearKernel implements ShearKernel {
 
     @Override
     public void applyInTurn(ShearModeField f, int first, int last, double[] x, double[] y, double[] z, int n) {
-        boolean forward = last >= first;
+        int direction = last >= first ? 1 : -1;
+        int stop = last + direction;
         int bundled = n - n % VectorSharedPasses.BUNDLE;
         for (int i = 0; i < bundled; i += VectorSharedPasses.BUNDLE) {
-            if (forward) {
-                VectorSharedPasses.forwardBundle(f, first, last, x, y, z, i);
-            } else {
-                VectorSharedPasses.backwardBundle(f, first, last, x, y, z, i);
-            }
+            VectorSharedPasses.inTurnBundle(f, first, stop, direction, x, y, z, i);
         }
         int whole = SPECIES.loopBound(n);
         for (int i = bundled; i < whole; i += LANES) {
-            if (forward) {
-                VectorSharedPasses.forwardVector(f, first, last, x, y, z, i);
-            } else {
-                VectorSharedPasses.backwardVector(f, first, last, x, y, z, i);
-            }
+            VectorSharedPasses.inTurnVector(f, first, stop, direction, x, y, z, i);
         }
-        int direction = forward ? 1 : -1;
         for (int i = whole; i < n; i++) {
-            tail.inTurnPoint(f, first, last + direction, direction, x, y, z, i);
+            tail.inTurnPoint(f, first, stop, direction, x, y, z, i);
         }
     }
 
