@@ -83,11 +83,6 @@ public final class ModeLanes {
         }
     }
 
-    /** The factor h the stored basis vectors carry. */
-    public double stepScale() {
-        return stepScale;
-    }
-
     /** Stores the basis vectors multiplied by h from now on (rescaled by the ratio of the new and old h). */
     public void setStepScale(double h) {
         if (h == stepScale) {
