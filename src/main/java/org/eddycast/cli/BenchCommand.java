@@ -32,7 +32,7 @@ final class BenchCommand implements Callable<Integer> {
     Path json;
 
     @Option(names = "--answer", description = "Instead of throughput, measure the seconds from process start to "
-            + "the standard workload's diffusivity within a 95% interval of +-2% per axis (Strang, shared).")
+            + "the standard workload's diffusivity within a 95%% interval of +-2%% per axis (Strang, shared).")
     boolean answer;
 
     @Option(names = "--particles", paramLabel = "N", description = "Override the workload's particle count.")

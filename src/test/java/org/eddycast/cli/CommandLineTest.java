@@ -108,4 +108,22 @@ class CommandLineTest {
             return new org.apache.pdfbox.text.PDFTextStripper().getText(d).replaceAll("\\s+", " ");
         }
     }
+
+    /** A lone percent sign in an option description is a format error that picocli reports on stderr. */
+    @Test
+    void everyHelpPageFormatsWithoutWarnings() {
+        java.io.PrintStream saved = System.err;
+        java.io.ByteArrayOutputStream captured = new java.io.ByteArrayOutputStream();
+        System.setErr(new java.io.PrintStream(captured, true));
+        try {
+            for (String command : new String[] {"run", "compare", "analyze", "check", "bench", "memory"}) {
+                Outcome o = run(command, "--help");
+                assertEquals(0, o.status(), command);
+                assertTrue(o.out().contains("Usage: eddycast " + command), o.out());
+            }
+        } finally {
+            System.setErr(saved);
+        }
+        assertEquals("", captured.toString());
+    }
 }
