@@ -17,7 +17,7 @@ public final class ModeLanes {
     private final int dimensions;
     private final int modes;
     private final int width;
-    /** Quantities per mode and lane, in this order within each mode's record. */
+    /** Quantities per mode and lane, in this order within each mode's record; the wavevector in turns (k / 2 pi). */
     static final int KX = 0;
     static final int KY = 1;
     static final int KZ = 2;

@@ -7,6 +7,9 @@ package org.eddycast.field;
  */
 public class ScalarShearKernel implements ShearKernel {
 
+    /** The lanes keep their wavevectors in turns (over 2 pi); the scalar loops turn the phase back to radians. */
+    private static final double TWO_PI = 2 * Math.PI;
+
     /** The sine the kernel uses; the reference kernel overrides it with {@link Math#sin}. */
     double sine(double phase) {
         return FastSinCos.sin(phase);
@@ -80,7 +83,8 @@ public class ScalarShearKernel implements ShearKernel {
             double pz = z[i];
             for (int m = first; m != last + direction; m += direction) {
                 int j = m * ModeLanes.FIELDS * n + i;
-                double p = d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz;
+                double p = TWO_PI
+                        * (d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz);
                 double c = cosine(p);
                 double s = sine(p);
                 double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
@@ -105,8 +109,8 @@ public class ScalarShearKernel implements ShearKernel {
             double dz = 0;
             for (int m = 0; m < f.modes(); m++) {
                 int j = m * ModeLanes.FIELDS * n + i;
-                double p = d[j + ModeLanes.KX * n] * x[i] + d[j + ModeLanes.KY * n] * y[i]
-                        + d[j + ModeLanes.KZ * n] * z[i];
+                double p = TWO_PI * (d[j + ModeLanes.KX * n] * x[i] + d[j + ModeLanes.KY * n] * y[i]
+                        + d[j + ModeLanes.KZ * n] * z[i]);
                 double c = cosine(p);
                 double s = sine(p);
                 double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;

@@ -32,10 +32,10 @@ public final class ShearModeField {
     final double[] kx;
     final double[] ky;
     final double[] kz;
-    /** Half the wavevector: the vector kernel's phase is then the half angle its sine and cosine start from. */
-    final double[] halfKx;
-    final double[] halfKy;
-    final double[] halfKz;
+    /** The wavevector over 2 pi: the vector kernel's phase is then in turns, which it reduces by rounding alone. */
+    final double[] turnKx;
+    final double[] turnKy;
+    final double[] turnKz;
     final double[] ax;
     final double[] ay;
     final double[] az;
@@ -72,9 +72,9 @@ public final class ShearModeField {
         kx = new double[modes];
         ky = new double[modes];
         kz = new double[modes];
-        halfKx = new double[modes];
-        halfKy = new double[modes];
-        halfKz = new double[modes];
+        turnKx = new double[modes];
+        turnKy = new double[modes];
+        turnKz = new double[modes];
         ax = new double[modes];
         ay = new double[modes];
         az = new double[modes];
@@ -117,9 +117,9 @@ public final class ShearModeField {
         kx[m] = k[0];
         ky[m] = k[1];
         kz[m] = dimensions == 3 ? k[2] : 0.0;
-        halfKx[m] = 0.5 * kx[m];
-        halfKy[m] = 0.5 * ky[m];
-        halfKz[m] = 0.5 * kz[m];
+        turnKx[m] = kx[m] * FastSinCos.ONE_OVER_TWO_PI;
+        turnKy[m] = ky[m] * FastSinCos.ONE_OVER_TWO_PI;
+        turnKz[m] = kz[m] * FastSinCos.ONE_OVER_TWO_PI;
         e1x[m] = e1[0];
         e1y[m] = e1[1];
         e1z[m] = dimensions == 3 ? e1[2] : 0.0;
@@ -226,9 +226,9 @@ public final class ShearModeField {
      * lanes compute their own amplitudes from the coefficients.
      */
     void copyMode(int m, double[] data, int j, int stride) {
-        data[j + ModeLanes.KX * stride] = kx[m];
-        data[j + ModeLanes.KY * stride] = ky[m];
-        data[j + ModeLanes.KZ * stride] = kz[m];
+        data[j + ModeLanes.KX * stride] = turnKx[m];
+        data[j + ModeLanes.KY * stride] = turnKy[m];
+        data[j + ModeLanes.KZ * stride] = turnKz[m];
         data[j + ModeLanes.E1X * stride] = e1x[m];
         data[j + ModeLanes.E1Y * stride] = e1y[m];
         data[j + ModeLanes.E1Z * stride] = e1z[m];

@@ -13,27 +13,23 @@ import static org.eddycast.field.ModeLanes.E2Z;
 import static org.eddycast.field.ModeLanes.KX;
 import static org.eddycast.field.ModeLanes.KY;
 import static org.eddycast.field.ModeLanes.KZ;
-import static org.eddycast.field.VectorSinCos.C0;
-import static org.eddycast.field.VectorSinCos.C1;
-import static org.eddycast.field.VectorSinCos.C2;
-import static org.eddycast.field.VectorSinCos.C3;
-import static org.eddycast.field.VectorSinCos.C4;
-import static org.eddycast.field.VectorSinCos.C5;
-import static org.eddycast.field.VectorSinCos.C6;
-import static org.eddycast.field.VectorSinCos.C7;
-import static org.eddycast.field.VectorSinCos.MINUS_PI_HI;
-import static org.eddycast.field.VectorSinCos.MINUS_PI_LO;
-import static org.eddycast.field.VectorSinCos.HALF;
 import static org.eddycast.field.VectorSinCos.MINUS_ONE;
-import static org.eddycast.field.VectorSinCos.ONE_OVER_TWO_PI;
 import static org.eddycast.field.VectorSinCos.ROUNDER;
-import static org.eddycast.field.VectorSinCos.S0;
-import static org.eddycast.field.VectorSinCos.S1;
-import static org.eddycast.field.VectorSinCos.S2;
-import static org.eddycast.field.VectorSinCos.S3;
-import static org.eddycast.field.VectorSinCos.S4;
-import static org.eddycast.field.VectorSinCos.S5;
-import static org.eddycast.field.VectorSinCos.S6;
+import static org.eddycast.field.VectorSinCos.TC0;
+import static org.eddycast.field.VectorSinCos.TC1;
+import static org.eddycast.field.VectorSinCos.TC2;
+import static org.eddycast.field.VectorSinCos.TC3;
+import static org.eddycast.field.VectorSinCos.TC4;
+import static org.eddycast.field.VectorSinCos.TC5;
+import static org.eddycast.field.VectorSinCos.TC6;
+import static org.eddycast.field.VectorSinCos.TC7;
+import static org.eddycast.field.VectorSinCos.TS0;
+import static org.eddycast.field.VectorSinCos.TS1;
+import static org.eddycast.field.VectorSinCos.TS2;
+import static org.eddycast.field.VectorSinCos.TS3;
+import static org.eddycast.field.VectorSinCos.TS4;
+import static org.eddycast.field.VectorSinCos.TS5;
+import static org.eddycast.field.VectorSinCos.TS6;
 
 import jdk.incubator.vector.DoubleVector;
 import jdk.incubator.vector.VectorSpecies;
@@ -76,19 +72,21 @@ final class VectorLanePasses {
             DoubleVector p1 = z1.fma(DoubleVector.fromArray(SPECIES, d, o + LANES + KZ * width),
                     y1.fma(DoubleVector.fromArray(SPECIES, d, o + LANES + KY * width),
                     x1.mul(DoubleVector.fromArray(SPECIES, d, o + LANES + KX * width))));
-            DoubleVector t0 = p0.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0.mul(HALF)));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
+            DoubleVector f0 = p0.sub(p0.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w0 = f0.mul(f0);
+            DoubleVector sh0 = w0.fma(TS6, TS5).fma(w0, TS4).fma(w0, TS3).fma(w0, TS2).fma(w0, TS1).fma(w0, TS0)
+                    .mul(f0);
+            DoubleVector ch0 = w0.fma(TC7, TC6).fma(w0, TC5).fma(w0, TC4).fma(w0, TC3).fma(w0, TC2).fma(w0, TC1)
+                    .fma(w0, TC0);
+            DoubleVector s0 = sh0.mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
-            DoubleVector t1 = p1.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h1 = t1.fma(MINUS_PI_LO, t1.fma(MINUS_PI_HI, p1.mul(HALF)));
-            DoubleVector w1 = h1.mul(h1);
-            DoubleVector sh1 = w1.fma(S6, S5).fma(w1, S4).fma(w1, S3).fma(w1, S2).fma(w1, S1).fma(w1, S0).mul(h1);
-            DoubleVector ch1 = w1.fma(C7, C6).fma(w1, C5).fma(w1, C4).fma(w1, C3).fma(w1, C2).fma(w1, C1).fma(w1, C0);
-            DoubleVector s1 = sh1.add(sh1).mul(ch1);
+            DoubleVector f1 = p1.sub(p1.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w1 = f1.mul(f1);
+            DoubleVector sh1 = w1.fma(TS6, TS5).fma(w1, TS4).fma(w1, TS3).fma(w1, TS2).fma(w1, TS1).fma(w1, TS0)
+                    .mul(f1);
+            DoubleVector ch1 = w1.fma(TC7, TC6).fma(w1, TC5).fma(w1, TC4).fma(w1, TC3).fma(w1, TC2).fma(w1, TC1)
+                    .fma(w1, TC0);
+            DoubleVector s1 = sh1.mul(ch1);
             DoubleVector c1 = ch1.add(ch1).fma(ch1, MINUS_ONE);
             DoubleVector u10 = DoubleVector.fromArray(SPECIES, d, o + ALPHA1 * width).fma(c0,
                     DoubleVector.fromArray(SPECIES, d, o + BETA1 * width).mul(s0));
@@ -131,12 +129,13 @@ final class VectorLanePasses {
             DoubleVector p0 = z0.fma(DoubleVector.fromArray(SPECIES, d, o + KZ * width),
                     y0.fma(DoubleVector.fromArray(SPECIES, d, o + KY * width),
                     x0.mul(DoubleVector.fromArray(SPECIES, d, o + KX * width))));
-            DoubleVector t0 = p0.fma(ONE_OVER_TWO_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0.mul(HALF)));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
+            DoubleVector f0 = p0.sub(p0.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w0 = f0.mul(f0);
+            DoubleVector sh0 = w0.fma(TS6, TS5).fma(w0, TS4).fma(w0, TS3).fma(w0, TS2).fma(w0, TS1).fma(w0, TS0)
+                    .mul(f0);
+            DoubleVector ch0 = w0.fma(TC7, TC6).fma(w0, TC5).fma(w0, TC4).fma(w0, TC3).fma(w0, TC2).fma(w0, TC1)
+                    .fma(w0, TC0);
+            DoubleVector s0 = sh0.mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
             DoubleVector u10 = DoubleVector.fromArray(SPECIES, d, o + ALPHA1 * width).fma(c0,
                     DoubleVector.fromArray(SPECIES, d, o + BETA1 * width).mul(s0));

@@ -1,25 +1,22 @@
 package org.eddycast.field;
 
-import static org.eddycast.field.VectorSinCos.C0;
-import static org.eddycast.field.VectorSinCos.C1;
-import static org.eddycast.field.VectorSinCos.C2;
-import static org.eddycast.field.VectorSinCos.C3;
-import static org.eddycast.field.VectorSinCos.C4;
-import static org.eddycast.field.VectorSinCos.C5;
-import static org.eddycast.field.VectorSinCos.C6;
-import static org.eddycast.field.VectorSinCos.C7;
-import static org.eddycast.field.VectorSinCos.MINUS_PI_HI;
-import static org.eddycast.field.VectorSinCos.MINUS_PI_LO;
 import static org.eddycast.field.VectorSinCos.MINUS_ONE;
-import static org.eddycast.field.VectorSinCos.ONE_OVER_PI;
 import static org.eddycast.field.VectorSinCos.ROUNDER;
-import static org.eddycast.field.VectorSinCos.S0;
-import static org.eddycast.field.VectorSinCos.S1;
-import static org.eddycast.field.VectorSinCos.S2;
-import static org.eddycast.field.VectorSinCos.S3;
-import static org.eddycast.field.VectorSinCos.S4;
-import static org.eddycast.field.VectorSinCos.S5;
-import static org.eddycast.field.VectorSinCos.S6;
+import static org.eddycast.field.VectorSinCos.TC0;
+import static org.eddycast.field.VectorSinCos.TC1;
+import static org.eddycast.field.VectorSinCos.TC2;
+import static org.eddycast.field.VectorSinCos.TC3;
+import static org.eddycast.field.VectorSinCos.TC4;
+import static org.eddycast.field.VectorSinCos.TC5;
+import static org.eddycast.field.VectorSinCos.TC6;
+import static org.eddycast.field.VectorSinCos.TC7;
+import static org.eddycast.field.VectorSinCos.TS0;
+import static org.eddycast.field.VectorSinCos.TS1;
+import static org.eddycast.field.VectorSinCos.TS2;
+import static org.eddycast.field.VectorSinCos.TS3;
+import static org.eddycast.field.VectorSinCos.TS4;
+import static org.eddycast.field.VectorSinCos.TS5;
+import static org.eddycast.field.VectorSinCos.TS6;
 
 import jdk.incubator.vector.DoubleVector;
 import jdk.incubator.vector.VectorSpecies;
@@ -30,8 +27,8 @@ import jdk.incubator.vector.VectorSpecies;
  * registers. Bundles of four vectors go through the shears in turn side by side, because one vector alone
  * would wait on each shear's result (about 70 cycles of dependent arithmetic) before starting the next; four
  * keep the arithmetic units busy. Shears applied at once do not wait on each other, so there one vector at a
- * time is enough. The phase is taken with the field's half wavevectors, which gives the half angle the sine
- * and cosine start from without a multiplication. Every loop is one flat method (see {@link VectorSinCos} for why and for the sine and
+ * time is enough. The phase is taken in turns with the field's wavevectors over 2 pi, which reduces by
+ * rounding alone. Every loop is one flat method (see {@link VectorSinCos} for why and for the sine and
  * cosine).
  */
 final class VectorSharedPasses {
@@ -59,9 +56,9 @@ final class VectorSharedPasses {
         DoubleVector z1 = DoubleVector.fromArray(SPECIES, z, i + LANES);
         DoubleVector z2 = DoubleVector.fromArray(SPECIES, z, i + 2 * LANES);
         DoubleVector z3 = DoubleVector.fromArray(SPECIES, z, i + 3 * LANES);
-        double[] kx = f.halfKx;
-        double[] ky = f.halfKy;
-        double[] kz = f.halfKz;
+        double[] kx = f.turnKx;
+        double[] ky = f.turnKy;
+        double[] kz = f.turnKz;
         double[] ax = f.ax;
         double[] ay = f.ay;
         double[] az = f.az;
@@ -76,33 +73,37 @@ final class VectorSharedPasses {
             DoubleVector p1 = z1.fma(kzm, y1.fma(kym, x1.mul(kxm)));
             DoubleVector p2 = z2.fma(kzm, y2.fma(kym, x2.mul(kxm)));
             DoubleVector p3 = z3.fma(kzm, y3.fma(kym, x3.mul(kxm)));
-            DoubleVector t0 = p0.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
+            DoubleVector f0 = p0.sub(p0.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w0 = f0.mul(f0);
+            DoubleVector sh0 = w0.fma(TS6, TS5).fma(w0, TS4).fma(w0, TS3).fma(w0, TS2).fma(w0, TS1).fma(w0, TS0)
+                    .mul(f0);
+            DoubleVector ch0 = w0.fma(TC7, TC6).fma(w0, TC5).fma(w0, TC4).fma(w0, TC3).fma(w0, TC2).fma(w0, TC1)
+                    .fma(w0, TC0);
+            DoubleVector s0 = sh0.mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
-            DoubleVector t1 = p1.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h1 = t1.fma(MINUS_PI_LO, t1.fma(MINUS_PI_HI, p1));
-            DoubleVector w1 = h1.mul(h1);
-            DoubleVector sh1 = w1.fma(S6, S5).fma(w1, S4).fma(w1, S3).fma(w1, S2).fma(w1, S1).fma(w1, S0).mul(h1);
-            DoubleVector ch1 = w1.fma(C7, C6).fma(w1, C5).fma(w1, C4).fma(w1, C3).fma(w1, C2).fma(w1, C1).fma(w1, C0);
-            DoubleVector s1 = sh1.add(sh1).mul(ch1);
+            DoubleVector f1 = p1.sub(p1.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w1 = f1.mul(f1);
+            DoubleVector sh1 = w1.fma(TS6, TS5).fma(w1, TS4).fma(w1, TS3).fma(w1, TS2).fma(w1, TS1).fma(w1, TS0)
+                    .mul(f1);
+            DoubleVector ch1 = w1.fma(TC7, TC6).fma(w1, TC5).fma(w1, TC4).fma(w1, TC3).fma(w1, TC2).fma(w1, TC1)
+                    .fma(w1, TC0);
+            DoubleVector s1 = sh1.mul(ch1);
             DoubleVector c1 = ch1.add(ch1).fma(ch1, MINUS_ONE);
-            DoubleVector t2 = p2.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h2 = t2.fma(MINUS_PI_LO, t2.fma(MINUS_PI_HI, p2));
-            DoubleVector w2 = h2.mul(h2);
-            DoubleVector sh2 = w2.fma(S6, S5).fma(w2, S4).fma(w2, S3).fma(w2, S2).fma(w2, S1).fma(w2, S0).mul(h2);
-            DoubleVector ch2 = w2.fma(C7, C6).fma(w2, C5).fma(w2, C4).fma(w2, C3).fma(w2, C2).fma(w2, C1).fma(w2, C0);
-            DoubleVector s2 = sh2.add(sh2).mul(ch2);
+            DoubleVector f2 = p2.sub(p2.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w2 = f2.mul(f2);
+            DoubleVector sh2 = w2.fma(TS6, TS5).fma(w2, TS4).fma(w2, TS3).fma(w2, TS2).fma(w2, TS1).fma(w2, TS0)
+                    .mul(f2);
+            DoubleVector ch2 = w2.fma(TC7, TC6).fma(w2, TC5).fma(w2, TC4).fma(w2, TC3).fma(w2, TC2).fma(w2, TC1)
+                    .fma(w2, TC0);
+            DoubleVector s2 = sh2.mul(ch2);
             DoubleVector c2 = ch2.add(ch2).fma(ch2, MINUS_ONE);
-            DoubleVector t3 = p3.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h3 = t3.fma(MINUS_PI_LO, t3.fma(MINUS_PI_HI, p3));
-            DoubleVector w3 = h3.mul(h3);
-            DoubleVector sh3 = w3.fma(S6, S5).fma(w3, S4).fma(w3, S3).fma(w3, S2).fma(w3, S1).fma(w3, S0).mul(h3);
-            DoubleVector ch3 = w3.fma(C7, C6).fma(w3, C5).fma(w3, C4).fma(w3, C3).fma(w3, C2).fma(w3, C1).fma(w3, C0);
-            DoubleVector s3 = sh3.add(sh3).mul(ch3);
+            DoubleVector f3 = p3.sub(p3.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w3 = f3.mul(f3);
+            DoubleVector sh3 = w3.fma(TS6, TS5).fma(w3, TS4).fma(w3, TS3).fma(w3, TS2).fma(w3, TS1).fma(w3, TS0)
+                    .mul(f3);
+            DoubleVector ch3 = w3.fma(TC7, TC6).fma(w3, TC5).fma(w3, TC4).fma(w3, TC3).fma(w3, TC2).fma(w3, TC1)
+                    .fma(w3, TC0);
+            DoubleVector s3 = sh3.mul(ch3);
             DoubleVector c3 = ch3.add(ch3).fma(ch3, MINUS_ONE);
             DoubleVector axm = DoubleVector.broadcast(SPECIES, ax[m]);
             DoubleVector bxm = DoubleVector.broadcast(SPECIES, bx[m]);
@@ -143,9 +144,9 @@ final class VectorSharedPasses {
         DoubleVector x0 = DoubleVector.fromArray(SPECIES, x, i);
         DoubleVector y0 = DoubleVector.fromArray(SPECIES, y, i);
         DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
-        double[] kx = f.halfKx;
-        double[] ky = f.halfKy;
-        double[] kz = f.halfKz;
+        double[] kx = f.turnKx;
+        double[] ky = f.turnKy;
+        double[] kz = f.turnKz;
         double[] ax = f.ax;
         double[] ay = f.ay;
         double[] az = f.az;
@@ -157,12 +158,13 @@ final class VectorSharedPasses {
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
             DoubleVector p0 = z0.fma(kzm, y0.fma(kym, x0.mul(kxm)));
-            DoubleVector t0 = p0.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
+            DoubleVector f0 = p0.sub(p0.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w0 = f0.mul(f0);
+            DoubleVector sh0 = w0.fma(TS6, TS5).fma(w0, TS4).fma(w0, TS3).fma(w0, TS2).fma(w0, TS1).fma(w0, TS0)
+                    .mul(f0);
+            DoubleVector ch0 = w0.fma(TC7, TC6).fma(w0, TC5).fma(w0, TC4).fma(w0, TC3).fma(w0, TC2).fma(w0, TC1)
+                    .fma(w0, TC0);
+            DoubleVector s0 = sh0.mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
             DoubleVector axm = DoubleVector.broadcast(SPECIES, ax[m]);
             DoubleVector bxm = DoubleVector.broadcast(SPECIES, bx[m]);
@@ -187,9 +189,9 @@ final class VectorSharedPasses {
         DoubleVector dx0 = DoubleVector.zero(SPECIES);
         DoubleVector dy0 = DoubleVector.zero(SPECIES);
         DoubleVector dz0 = DoubleVector.zero(SPECIES);
-        double[] kx = f.halfKx;
-        double[] ky = f.halfKy;
-        double[] kz = f.halfKz;
+        double[] kx = f.turnKx;
+        double[] ky = f.turnKy;
+        double[] kz = f.turnKz;
         double[] ax = f.ax;
         double[] ay = f.ay;
         double[] az = f.az;
@@ -201,12 +203,13 @@ final class VectorSharedPasses {
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
             DoubleVector p0 = z0.fma(kzm, y0.fma(kym, x0.mul(kxm)));
-            DoubleVector t0 = p0.fma(ONE_OVER_PI, ROUNDER).sub(ROUNDER);
-            DoubleVector h0 = t0.fma(MINUS_PI_LO, t0.fma(MINUS_PI_HI, p0));
-            DoubleVector w0 = h0.mul(h0);
-            DoubleVector sh0 = w0.fma(S6, S5).fma(w0, S4).fma(w0, S3).fma(w0, S2).fma(w0, S1).fma(w0, S0).mul(h0);
-            DoubleVector ch0 = w0.fma(C7, C6).fma(w0, C5).fma(w0, C4).fma(w0, C3).fma(w0, C2).fma(w0, C1).fma(w0, C0);
-            DoubleVector s0 = sh0.add(sh0).mul(ch0);
+            DoubleVector f0 = p0.sub(p0.add(ROUNDER).sub(ROUNDER));
+            DoubleVector w0 = f0.mul(f0);
+            DoubleVector sh0 = w0.fma(TS6, TS5).fma(w0, TS4).fma(w0, TS3).fma(w0, TS2).fma(w0, TS1).fma(w0, TS0)
+                    .mul(f0);
+            DoubleVector ch0 = w0.fma(TC7, TC6).fma(w0, TC5).fma(w0, TC4).fma(w0, TC3).fma(w0, TC2).fma(w0, TC1)
+                    .fma(w0, TC0);
+            DoubleVector s0 = sh0.mul(ch0);
             DoubleVector c0 = ch0.add(ch0).fma(ch0, MINUS_ONE);
             DoubleVector axm = DoubleVector.broadcast(SPECIES, ax[m]);
             DoubleVector bxm = DoubleVector.broadcast(SPECIES, bx[m]);

@@ -6,15 +6,20 @@ import jdk.incubator.vector.VectorSpecies;
 /**
  * Constants of the vector sine and cosine, whose method is written out inside each vector kernel loop.
  *
- * <p>Method, lane by lane, as in {@link FastSinCos}: the nearest whole number q of turns is found by adding and
- * removing 1.5 * 2^52 (which rounds to the nearest integer for |phase / 2 pi| below 2^51); Cody-Waite reduction
- * of the half angle h = phase / 2 - q pi with a two-part constant by fused multiply-adds; sin h = h P(h^2) and
- * cos h = Q(h^2) by Horner's rule with fused multiply-adds; then sin(phase) = (2 sin h) cos h and
- * cos(phase) = (2 cos h) cos h - 1. Floating-point arithmetic only: no quadrant bits, no reinterpretation of
- * lanes.
+ * <p>Method, lane by lane: the kernels take the phase in turns, t = (k / 2 pi) . x, from wavevectors stored
+ * over 2 pi. The nearest whole number of turns is found by adding and removing 1.5 * 2^52 (which rounds to
+ * the nearest integer for |t| below 2^51), and the fraction f = t - rint(t), in [-1/2, 1/2], is exact, so the
+ * reduction costs three additions and no multiplication. Then 2 sin(pi f) = f P(f^2) and
+ * cos(pi f) = Q(f^2) by Horner's rule with fused multiply-adds ({@link FastSinCos#TURN_SINE},
+ * {@link FastSinCos#TURN_COSINE}), and the double-angle formulas give sin(2 pi f) = (2 sin(pi f)) cos(pi f)
+ * and cos(2 pi f) = (2 cos(pi f)) cos(pi f) - 1. Floating-point arithmetic only: no quadrant bits, no
+ * reinterpretation of lanes. The constants S0..S6 and C0..C7 are the radian polynomials of an angle already
+ * in [-pi/2, pi/2], which the normal variates use.
  *
- * <p>Accuracy: within 2e-13 absolute of {@link Math#sin} and {@link Math#cos} for |phase| up to 1e6 (tested
- * through the kernels).
+ * <p>Accuracy: within 1e-13 absolute of the sine and cosine of 2 pi t for the turn phase t as the kernel forms
+ * it (tested for |t| up to 1e5); that phase carries the rounding of its dot product, as a phase in radians
+ * does, plus that of k / 2 pi: a relative error of a few units in the last place, below 1e-13 for phases up
+ * to a few hundred radians (tested through the kernels).
  *
  * <p>Why written out: the JIT turns Vector API calls into machine vectors only when it inlines them all into
  * one compiled loop; helper methods taking vectors may be compiled apart, early and with a thin profile, and
@@ -28,14 +33,9 @@ public final class VectorSinCos {
     public static final VectorSpecies<Double> SPECIES = DoubleVector.SPECIES_PREFERRED;
     /** Longs in a vector of the same shape, for the bit operations. */
     public static final VectorSpecies<Long> LONGS = SPECIES.withLanes(long.class);
-    public static final DoubleVector ONE_OVER_TWO_PI = DoubleVector.broadcast(SPECIES, FastSinCos.ONE_OVER_TWO_PI);
-    public static final DoubleVector ONE_OVER_PI = DoubleVector.broadcast(SPECIES, 1.0 / Math.PI);
-    public static final DoubleVector HALF = DoubleVector.broadcast(SPECIES, 0.5);
     public static final DoubleVector MINUS_ONE = DoubleVector.broadcast(SPECIES, -1.0);
     /** 1.5 * 2^52. */
     public static final DoubleVector ROUNDER = DoubleVector.broadcast(SPECIES, 6755399441055744.0);
-    public static final DoubleVector MINUS_PI_HI = DoubleVector.broadcast(SPECIES, -FastSinCos.PI_HI);
-    public static final DoubleVector MINUS_PI_LO = DoubleVector.broadcast(SPECIES, -FastSinCos.PI_LO);
     public static final DoubleVector ONE = DoubleVector.broadcast(SPECIES, 1.0);
     public static final DoubleVector S0 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[0]);
     public static final DoubleVector S1 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[1]);
@@ -52,6 +52,21 @@ public final class VectorSinCos {
     public static final DoubleVector C5 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[5]);
     public static final DoubleVector C6 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[6]);
     public static final DoubleVector C7 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[7]);
+    public static final DoubleVector TS0 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[0]);
+    public static final DoubleVector TS1 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[1]);
+    public static final DoubleVector TS2 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[2]);
+    public static final DoubleVector TS3 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[3]);
+    public static final DoubleVector TS4 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[4]);
+    public static final DoubleVector TS5 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[5]);
+    public static final DoubleVector TS6 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[6]);
+    public static final DoubleVector TC0 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[0]);
+    public static final DoubleVector TC1 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[1]);
+    public static final DoubleVector TC2 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[2]);
+    public static final DoubleVector TC3 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[3]);
+    public static final DoubleVector TC4 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[4]);
+    public static final DoubleVector TC5 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[5]);
+    public static final DoubleVector TC6 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[6]);
+    public static final DoubleVector TC7 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_COSINE[7]);
 
     private VectorSinCos() {
     }
