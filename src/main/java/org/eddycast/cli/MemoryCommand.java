@@ -30,9 +30,9 @@ import picocli.CommandLine.Spec;
  *
  * <p>The bound: the streamed moments hold axes * R * (R + 1) doubles (R records, at most about 136 whatever the
  * number of steps); each worker holds one block's state (about 23 arrays of M doubles for the field's modes, 12
- * arrays of G doubles for a group of particles, one curve of axes * R doubles); a batch keeps 16 curves. None of
- * it depends on the number of particles or steps. Run with a small heap (java -Xmx64m) to see a run finish
- * inside it.
+ * arrays of G doubles for a group of particles, one curve of axes * R doubles); the two batches in flight keep
+ * 16 curves each. None of it depends on the number of particles or steps. Run with a small heap
+ * (java -Xmx64m) to see a run finish inside it.
  */
 @Command(name = "memory", mixinStandardHelpOptions = true,
         description = "Print the memory bound and the measured peak memory of runs: each SCENARIO given, then a "
@@ -111,9 +111,10 @@ final class MemoryCommand implements Callable<Integer> {
         long curve = axes * records;
         long moments = axes * records * (records + 1);
         long perWorker = 23L * c.model().modeCount() + 12L * Math.max(c.groupSize(), 64) + curve;
-        long batch = 16 * curve;
-        // the moments, one snapshot handed to the listener, the batch's curves and every worker's block
-        return 8 * (2 * moments + batch + workers * perWorker);
+        long batches = 2 * 16 * curve;
+        // the moments, one snapshot handed to the listener, the curves of the two batches in flight and every
+        // worker's block
+        return 8 * (2 * moments + batches + workers * perWorker);
     }
 
     private static void resetHeapPeaks() {

@@ -1,5 +1,6 @@
 package org.eddycast.particles;
 
+import java.util.ArrayDeque;
 import java.util.Locale;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
@@ -28,9 +29,10 @@ import org.eddycast.stats.DisplacementMoments;
  *
  * <p>Memory bound: per worker thread one block's workspace (above) and its curve (axes x records doubles);
  * for the run, the moments (axes x records^2 doubles, about 0.45 MB for 3 axes and the schedule's ~136
- * records) and one batch of {@value #BATCH} curves. Nothing depends on the number of steps or particles.
+ * records) and two batches of {@value #BATCH} curves. Nothing depends on the number of steps or particles.
  *
- * <p>Blocks run in parallel in batches of {@value #BATCH}; each has its own random stream
+ * <p>Blocks run in parallel in batches of {@value #BATCH}, two batches in flight so that no worker waits at
+ * the end of a batch; each block has its own random stream
  * ({@link BlockStreams}) from which it draws its realizations, start points and the seeds of its bulk normal
  * variates ({@link NormalStream}), and the batch's curves are merged in block order, so the result is the same,
  * bit for bit, for any thread count.
@@ -119,17 +121,21 @@ public final class EnsembleRunner {
             AtomicLong groupSteps = new AtomicLong();
             double totalGroupSteps = (double) count * (blockSize / groupSize) * steps;
             long end = blocksDone + count;
+            long submitted = blocksDone;
+            // Two batches in flight: a worker that finishes its part of one batch starts on the next
+            // instead of waiting for the other workers' last blocks.
+            ArrayDeque<Batch> inFlight = new ArrayDeque<>();
             while (blocksDone < end) {
-                int batch = (int) Math.min(BATCH, end - blocksDone);
-                long first = blocksDone;
-                double[][] curves = new double[batch][];
-                Future<?> future = pool.submit(() -> IntStream.range(0, batch).parallel()
-                        .forEach(i -> curves[i] = runBlock(first + i, cancel, groupSteps)));
-                awaitBatch(future, cancel, listener, groupSteps, totalGroupSteps);
-                for (double[] curve : curves) {
+                while (inFlight.size() < 2 && submitted < end) {
+                    inFlight.add(submit(pool, submitted, (int) Math.min(BATCH, end - submitted), cancel, groupSteps));
+                    submitted += inFlight.peekLast().curves().length;
+                }
+                Batch batch = inFlight.remove();
+                awaitBatch(batch.future(), cancel, listener, groupSteps, totalGroupSteps);
+                for (double[] curve : batch.curves()) {
                     moments.increment(curve);
                 }
-                blocksDone += batch;
+                blocksDone += batch.curves().length;
                 listener.progress(Math.min(1.0, groupSteps.get() / totalGroupSteps), moments.copy());
             }
         } finally {
@@ -140,6 +146,17 @@ public final class EnsembleRunner {
                 Thread.currentThread().interrupt();
             }
         }
+    }
+
+    /** A batch of blocks running on the pool, and the curves its blocks fill in. */
+    private record Batch(Future<?> future, double[][] curves) {
+    }
+
+    private Batch submit(ForkJoinPool pool, long first, int size, Cancellation cancel, AtomicLong groupSteps) {
+        double[][] curves = new double[size][];
+        Future<?> future = pool.submit(() -> IntStream.range(0, size).parallel()
+                .forEach(i -> curves[i] = runBlock(first + i, cancel, groupSteps)));
+        return new Batch(future, curves);
     }
 
     private static void awaitBatch(Future<?> future, Cancellation cancel, RunListener listener, AtomicLong done,
