@@ -13,7 +13,9 @@ import org.eddycast.engine.DiffusivityStudy;
 import org.eddycast.engine.DimensionlessCase;
 import org.eddycast.engine.Engine;
 import org.eddycast.engine.SimulationCache;
+import org.eddycast.field.ModeLanes;
 import org.eddycast.particles.Cancellation;
+import org.eddycast.particles.EnsembleRunner;
 import org.eddycast.particles.Integrator;
 import org.eddycast.particles.RunListener;
 import org.eddycast.scenario.ScenarioReader;
@@ -30,7 +32,8 @@ import picocli.CommandLine.Spec;
  *
  * <p>The bound: the streamed moments hold axes * R * (R + 1) doubles (R records, at most about 136 whatever the
  * number of steps); each worker holds one block's state (about 23 arrays of M doubles for the field's modes, 12
- * arrays of G doubles for a group of particles, one curve of axes * R doubles); the two batches in flight keep
+ * arrays of G doubles for a group of particles, one curve of axes * R doubles, and with one realization per
+ * particle the block's lanes, 15 doubles per mode and particle); the two batches in flight keep
  * 16 curves each. None of it depends on the number of particles or steps. Run with a small heap
  * (java -Xmx64m) to see a run finish inside it.
  */
@@ -110,7 +113,10 @@ final class MemoryCommand implements Callable<Integer> {
         long records = 136;
         long curve = axes * records;
         long moments = axes * records * (records + 1);
-        long perWorker = 23L * c.model().modeCount() + 12L * Math.max(c.groupSize(), 64) + curve;
+        int block = EnsembleRunner.blockSizeFor(c.groupSize());
+        // one realization per particle: the block's lanes (15 doubles per mode and particle) and its variates
+        long lanes = c.groupSize() == 1 ? ModeLanes.doublesFor(c.model().modeCount(), block) + 4L * block : 0;
+        long perWorker = 23L * c.model().modeCount() + 12L * Math.max(c.groupSize(), 64) + lanes + curve;
         long batches = 2 * 16 * curve;
         // the moments, one snapshot handed to the listener, the curves of the two batches in flight and every
         // worker's block

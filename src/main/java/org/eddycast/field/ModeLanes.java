@@ -59,6 +59,11 @@ public final class ModeLanes {
         data = new double[modes * FIELDS * width];
     }
 
+    /** Doubles held by lanes of this many modes and lanes. */
+    public static long doublesFor(int modes, int width) {
+        return (long) modes * FIELDS * width;
+    }
+
     public int dimensions() {
         return dimensions;
     }

@@ -83,12 +83,17 @@ public final class EnsembleRunner {
         this.dt = dt;
         this.steps = steps;
         this.groupSize = groupSize;
-        this.blockSize = groupSize >= MIN_BLOCK ? groupSize : groupSize * ((MIN_BLOCK + groupSize - 1) / groupSize);
+        this.blockSize = blockSizeFor(groupSize);
         this.d0 = d0.clone();
         this.streams = new BlockStreams(seed);
         this.schedule = RecordSchedule.forSteps(steps);
         this.moments = new DisplacementMoments(model.dimensions(), schedule.times(dt), blockSize);
         this.kernels = kernels;
+    }
+
+    /** Particles per block for groups of the given size: a whole number of groups, at least {@value #MIN_BLOCK}. */
+    public static int blockSizeFor(int groupSize) {
+        return groupSize >= MIN_BLOCK ? groupSize : groupSize * ((MIN_BLOCK + groupSize - 1) / groupSize);
     }
 
     /** Particles per block (a whole number of groups). */
