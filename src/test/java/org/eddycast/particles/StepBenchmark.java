@@ -6,6 +6,7 @@ import java.util.random.RandomGeneratorFactory;
 import org.eddycast.field.ModeLanes;
 import org.eddycast.field.PowerLawBand;
 import org.eddycast.field.RandomFourierModel;
+import org.eddycast.field.ShearKernel;
 import org.eddycast.field.ShearModeField;
 import org.eddycast.field.SpectrumTable;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -25,7 +26,7 @@ import org.openjdk.jmh.annotations.Warmup;
 /**
  * JMH microbenchmarks of one particle step on one core, on the standard workload's field (3D, 64 modes,
  * power-law band with slope -5/3 and |k| in [1, 16], u' = 1, tau = 1, D0 = 0.01, dt = 0.02): a group of 64
- * particles sharing a realization, a block of 64 particles with one realization each, the drift pass alone,
+ * particles sharing a realization, a block of 64 particles with one realization each, the drift passes alone,
  * and the normal variates. Scores are in operations per microsecond, where an operation is one mode-update
  * (one particle moved by one mode) or, for {@link #normals}, one variate; multiply by 1e6 for per second.
  * Several forks, because the compiled vector code differs from one start of the runtime to the next.
@@ -53,6 +54,8 @@ public class StepBenchmark {
     ParticleBlock shared;
     ParticleBlock own;
     ParticleStepper stepper;
+    ShearKernel kernel;
+    Integrator scheme;
     NormalStream normals;
     double[] variates;
 
@@ -68,8 +71,9 @@ public class StepBenchmark {
             field.prepareStep(DT);
             lanes.load(lane, field);
         }
-        stepper = new ParticleStepper(Integrator.fromKey(integrator), DT, new double[] {0.01, 0.01, 0.01},
-                KernelChoice.fastest().newShearKernel());
+        scheme = Integrator.fromKey(integrator);
+        kernel = KernelChoice.fastest().newShearKernel();
+        stepper = new ParticleStepper(scheme, DT, new double[] {0.01, 0.01, 0.01}, kernel);
         normals = KernelChoice.fastest().newNormalStream();
         normals.reseed(rng);
         variates = new double[VARIATES];
@@ -112,6 +116,15 @@ public class StepBenchmark {
     @OperationsPerInvocation(UPDATES)
     public ParticleBlock ownStep() {
         stepper.step(lanes, own, normals);
+        return own;
+    }
+
+    /** The drift pass alone of a block with one realization per particle (amplitudes held). */
+    @Benchmark
+    @OperationsPerInvocation(UPDATES)
+    public ParticleBlock ownDrift() {
+        lanes.setStepScale(scheme.stepScale(DT));
+        scheme.drift(kernel, lanes, own);
         return own;
     }
 

@@ -23,6 +23,7 @@ class StepBenchmarkTest {
             b.shared.position(7, after);
             assertMoved(before, after, integrator + ", shared");
             b.own.position(7, before);
+            b.ownDrift();
             b.ownStep();
             b.own.position(7, after);
             assertMoved(before, after, integrator + ", own");
