@@ -83,12 +83,13 @@ final class BenchCommand implements Callable<Integer> {
                         + "median of %d after a warm-up; %s kernel, %d threads%n", w.particles(), w.modes(), w.steps(),
                 (double) w.particles() * w.modes() * w.steps(), w.repetitions(),
                 KernelChoice.fastest().name().toLowerCase(Locale.ROOT), threadCount);
-        out.printf(Locale.ROOT, "%-8s %-7s %7s %15s %15s %12s %28s%n", "scheme", "sharing", "threads",
-                "mode-updates/s", "per CPU-second", "peak memory", "diffusivity (95% interval)");
+        out.printf(Locale.ROOT, "%-8s %-7s %7s %15s %19s %15s %12s %28s%n", "scheme", "sharing", "threads",
+                "mode-updates/s", "(slowest, fastest)", "per CPU-second", "peak memory", "diffusivity (95% interval)");
         out.flush();
         List<Benchmark.Figure> figures = Benchmark.select(w, threadCount, integrators, modesOfSharing, f -> {
-            out.printf(Locale.ROOT, "%-8s %-7s %7d %15.3g %15.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(),
-                    f.sharing(), f.threads(), f.modeUpdatesPerSecond(), f.modeUpdatesPerCpuSecond(),
+            out.printf(Locale.ROOT, "%-8s %-7s %7d %15.3g %19s %15.3g %9.0f MB %9.4f [%.4f, %.4f]%n", f.integrator(),
+                    f.sharing(), f.threads(), f.modeUpdatesPerSecond(), String.format(Locale.ROOT, "(%.3g, %.3g)",
+                    f.slowestModeUpdatesPerSecond(), f.fastestModeUpdatesPerSecond()), f.modeUpdatesPerCpuSecond(),
                     f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
@@ -102,6 +103,9 @@ final class BenchCommand implements Callable<Integer> {
                 r.put("sharing", f.sharing());
                 r.put("threads", f.threads());
                 r.put("modeUpdatesPerSecond", f.modeUpdatesPerSecond());
+                ObjectNode spread = r.putObject("modeUpdatesPerSecondRange");
+                spread.put("low", f.slowestModeUpdatesPerSecond());
+                spread.put("high", f.fastestModeUpdatesPerSecond());
                 r.put("modeUpdatesPerCpuSecond", f.modeUpdatesPerCpuSecond());
                 r.put("peakMemoryBytes", f.peakMemoryBytes());
                 ObjectNode d = r.putObject("diffusivity");

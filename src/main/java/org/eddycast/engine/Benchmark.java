@@ -24,13 +24,14 @@ import org.eddycast.stats.AxisEstimate;
  */
 public final class Benchmark {
 
-    /** One measured configuration. */
     /**
-     * One measured configuration. Throughput is by the wall clock; the same work per CPU-second of the whole
-     * process (workers, compiler and collector) is given beside it, because on a machine shared with other
-     * work the wall clock also counts time the workers spent waiting for a core.
+     * One measured configuration. Throughput is by the wall clock, the median repetition's, with the slowest and
+     * the fastest repetition's beside it so that the spread is seen; the same work per CPU-second of the whole
+     * process (workers, compiler and collector) is given too, because on a machine shared with other work the
+     * wall clock also counts time the workers spent waiting for a core.
      */
     public record Figure(String integrator, String sharing, int threads, double modeUpdatesPerSecond,
+                         double slowestModeUpdatesPerSecond, double fastestModeUpdatesPerSecond,
                          double modeUpdatesPerCpuSecond, long peakMemoryBytes, double diffusivity, double low,
                          double high, double medianSeconds) {
     }
@@ -109,7 +110,8 @@ public final class Benchmark {
             high += a.diffusivity().high() / 3;
         }
         return new Figure(integrator.key(), shared ? "shared" : "own", threads, work / median,
-                medianCpu > 0 ? work / medianCpu : Double.NaN, peakMemoryBytes(), value, low, high, median);
+                work / seconds[seconds.length - 1], work / seconds[0], medianCpu > 0 ? work / medianCpu : Double.NaN,
+                peakMemoryBytes(), value, low, high, median);
     }
 
     /** CPU time of the whole process so far, in nanoseconds (-1 where the platform does not say). */

@@ -25,6 +25,9 @@ class BenchCommandTest {
         for (JsonNode r : results) {
             assertEquals(2, r.get("threads").asInt());
             assertTrue(r.get("modeUpdatesPerSecond").asDouble() > 0);
+            JsonNode spread = r.get("modeUpdatesPerSecondRange");
+            assertTrue(spread.get("low").asDouble() <= r.get("modeUpdatesPerSecond").asDouble()
+                    && r.get("modeUpdatesPerSecond").asDouble() <= spread.get("high").asDouble(), r.toString());
             assertTrue(r.get("peakMemoryBytes").asLong() > 0);
             JsonNode d = r.get("diffusivity");
             assertTrue(d.get("low").asDouble() <= d.get("value").asDouble()
