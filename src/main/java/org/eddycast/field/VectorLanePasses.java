@@ -64,8 +64,10 @@ final class VectorLanePasses {
         DoubleVector y1 = DoubleVector.fromArray(SPECIES, y, i + LANES);
         DoubleVector z0 = DoubleVector.fromArray(SPECIES, z, i);
         DoubleVector z1 = DoubleVector.fromArray(SPECIES, z, i + LANES);
-        for (int m = first; m != stop; m += direction) {
-            int o = m * ModeLanes.FIELDS * width + i;
+        int count = (stop - first) * direction;
+        int record = direction * ModeLanes.FIELDS * width;
+        for (int k = 0; k < count; k++) {
+            int o = first * ModeLanes.FIELDS * width + i + k * record;
             DoubleVector p0 = z0.fma(DoubleVector.fromArray(SPECIES, d, o + KZ * width),
                     y0.fma(DoubleVector.fromArray(SPECIES, d, o + KY * width),
                     x0.mul(DoubleVector.fromArray(SPECIES, d, o + KX * width))));
@@ -125,7 +127,10 @@ final class VectorLanePasses {
         DoubleVector dx0 = DoubleVector.zero(SPECIES);
         DoubleVector dy0 = DoubleVector.zero(SPECIES);
         DoubleVector dz0 = DoubleVector.zero(SPECIES);
-        for (int o = i; o < end; o += ModeLanes.FIELDS * width) {
+        int record = ModeLanes.FIELDS * width;
+        int modes = end / record;
+        for (int m = 0; m < modes; m++) {
+            int o = i + m * record;
             DoubleVector p0 = z0.fma(DoubleVector.fromArray(SPECIES, d, o + KZ * width),
                     y0.fma(DoubleVector.fromArray(SPECIES, d, o + KY * width),
                     x0.mul(DoubleVector.fromArray(SPECIES, d, o + KX * width))));

@@ -65,7 +65,9 @@ final class VectorSharedPasses {
         double[] bx = f.bx;
         double[] by = f.by;
         double[] bz = f.bz;
-        for (int m = first; m != stop; m += direction) {
+        int count = (stop - first) * direction;
+        for (int k = 0; k < count; k++) {
+            int m = first + k * direction;
             DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);
@@ -153,7 +155,9 @@ final class VectorSharedPasses {
         double[] bx = f.bx;
         double[] by = f.by;
         double[] bz = f.bz;
-        for (int m = first; m != stop; m += direction) {
+        int count = (stop - first) * direction;
+        for (int k = 0; k < count; k++) {
+            int m = first + k * direction;
             DoubleVector kxm = DoubleVector.broadcast(SPECIES, kx[m]);
             DoubleVector kym = DoubleVector.broadcast(SPECIES, ky[m]);
             DoubleVector kzm = DoubleVector.broadcast(SPECIES, kz[m]);

@@ -27,6 +27,12 @@ import jdk.incubator.vector.VectorSpecies;
  * JIT stops inlining once a compiled method grows past a fixed size in its intermediate form, and a vector
  * operation left out in that way again puts every vector on the heap (a run then goes three times slower,
  * by chance, depending on the profile the JIT saw).
+ *
+ * <p>Every loop over the modes counts from zero by one and derives the mode from the count, also when it
+ * sweeps the modes backwards: the JIT optimizes fully only such counted loops. Written as
+ * {@code for (m = first; m != stop; m += direction)} the same passes ran the Lie drift at 58% (one
+ * realization per particle, 26 vector loads per mode) and 73% (shared realizations) of the counted loop's
+ * speed (JMH, one core).
  */
 public final class VectorSinCos {
 
