@@ -10,6 +10,9 @@ public class ScalarShearKernel implements ShearKernel {
     /** The lanes keep their wavevectors in turns (over 2 pi); the scalar loops turn the phase back to radians. */
     private static final double TWO_PI = 2 * Math.PI;
 
+    /** One lane's displacement by one mode, written by {@link #laneMove}; a kernel belongs to one thread. */
+    private final double[] move = new double[3];
+
     /** The sine the kernel uses; the reference kernel overrides it with {@link Math#sin}. */
     double sine(double phase) {
         return FastSinCos.sin(phase);
@@ -82,16 +85,10 @@ public class ScalarShearKernel implements ShearKernel {
             double py = y[i];
             double pz = z[i];
             for (int m = first; m != last + direction; m += direction) {
-                int j = m * ModeLanes.FIELDS * n + i;
-                double p = TWO_PI
-                        * (d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz);
-                double c = cosine(p);
-                double s = sine(p);
-                double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
-                double u2 = d[j + ModeLanes.ALPHA2 * n] * c + d[j + ModeLanes.BETA2 * n] * s;
-                px += u1 * d[j + ModeLanes.E1X * n] + u2 * d[j + ModeLanes.E2X * n];
-                py += u1 * d[j + ModeLanes.E1Y * n] + u2 * d[j + ModeLanes.E2Y * n];
-                pz += u1 * d[j + ModeLanes.E1Z * n] + u2 * d[j + ModeLanes.E2Z * n];
+                laneMove(d, m * ModeLanes.FIELDS * n + i, n, px, py, pz);
+                px += move[0];
+                py += move[1];
+                pz += move[2];
             }
             x[i] = px;
             y[i] = py;
@@ -108,21 +105,31 @@ public class ScalarShearKernel implements ShearKernel {
             double dy = 0;
             double dz = 0;
             for (int m = 0; m < f.modes(); m++) {
-                int j = m * ModeLanes.FIELDS * n + i;
-                double p = TWO_PI * (d[j + ModeLanes.KX * n] * x[i] + d[j + ModeLanes.KY * n] * y[i]
-                        + d[j + ModeLanes.KZ * n] * z[i]);
-                double c = cosine(p);
-                double s = sine(p);
-                double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
-                double u2 = d[j + ModeLanes.ALPHA2 * n] * c + d[j + ModeLanes.BETA2 * n] * s;
-                dx += u1 * d[j + ModeLanes.E1X * n] + u2 * d[j + ModeLanes.E2X * n];
-                dy += u1 * d[j + ModeLanes.E1Y * n] + u2 * d[j + ModeLanes.E2Y * n];
-                dz += u1 * d[j + ModeLanes.E1Z * n] + u2 * d[j + ModeLanes.E2Z * n];
+                laneMove(d, m * ModeLanes.FIELDS * n + i, n, x[i], y[i], z[i]);
+                dx += move[0];
+                dy += move[1];
+                dz += move[2];
             }
             x[i] += dx;
             y[i] += dy;
             z[i] += dz;
         }
+    }
+
+    /**
+     * One lane's mode at a point into {@link #move}: the record from slot j with lane stride n, wavevector in
+     * turns, displacement (alpha1 c + beta1 s) e1 + (alpha2 c + beta2 s) e2.
+     */
+    private void laneMove(double[] d, int j, int n, double px, double py, double pz) {
+        double p = TWO_PI
+                * (d[j + ModeLanes.KX * n] * px + d[j + ModeLanes.KY * n] * py + d[j + ModeLanes.KZ * n] * pz);
+        double c = cosine(p);
+        double s = sine(p);
+        double u1 = d[j + ModeLanes.ALPHA1 * n] * c + d[j + ModeLanes.BETA1 * n] * s;
+        double u2 = d[j + ModeLanes.ALPHA2 * n] * c + d[j + ModeLanes.BETA2 * n] * s;
+        move[0] = u1 * d[j + ModeLanes.E1X * n] + u2 * d[j + ModeLanes.E2X * n];
+        move[1] = u1 * d[j + ModeLanes.E1Y * n] + u2 * d[j + ModeLanes.E2Y * n];
+        move[2] = u1 * d[j + ModeLanes.E1Z * n] + u2 * d[j + ModeLanes.E2Z * n];
     }
 
     @Override
