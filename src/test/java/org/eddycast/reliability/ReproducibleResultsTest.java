@@ -9,8 +9,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Path;
-import org.eddycast.engine.DiffusivityResult;
-import org.eddycast.engine.DiffusivityStudy;
 import org.eddycast.engine.Engine;
 import org.eddycast.engine.SimulationCache;
 import org.eddycast.engine.StudyResult;
@@ -23,8 +21,6 @@ import org.eddycast.report.TextSummary;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.scenario.ScenarioWriter;
-import org.eddycast.stats.AxisEstimate;
-import org.eddycast.stats.DisplacementMoments;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -34,73 +30,34 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class ReproducibleResultsTest {
 
-    /** An invented open-channel reach given directly, small enough to run in a fraction of a second. */
-    private static final String SCENARIO = """
-            { "version": 1, "name": "reach below the weir",
-              "flow": { "kind": "direct", "dimensions": 3, "rmsVelocity": 0.06, "integralLength": 0.4,
-                        "correlationTime": 8.0, "meanVelocity": 0.3,
-                        "spectrum": { "model": "power-law", "slope": -1.6667, "wavenumberRatio": 12 } },
-              "substance": { "name": "rhodamine", "molecularDiffusivity": 4.0e-10 },
-              "release": { "mass": 0.25 },
-              "simulation": { "particles": 1024, "groupSize": 64, "modes": 16, "integrator": "strang",
-                              "timeStep": 0.5, "duration": 60, "seed": 20240611 } }
-            """;
-
     @TempDir
     Path folder;
 
-    private static DiffusivityResult simulate(Scenario s, int threads) {
-        return DiffusivityStudy.run(Engine.dimensionlessCase(s), threads, RunListener.NONE, new Cancellation());
-    }
-
-    /** Every number the simulation produced: moments (mean and covariance) and per-axis estimates. */
-    private static double[] numbers(DiffusivityResult r) {
-        DisplacementMoments m = r.moments();
-        int n = m.records();
-        double[] all = new double[m.axes() * n * (n + 1) + 4 * r.axes().size()];
-        int k = 0;
-        for (int a = 0; a < m.axes(); a++) {
-            for (int i = 0; i < n; i++) {
-                all[k++] = m.mean(a, i);
-                for (int j = 0; j < n; j++) {
-                    all[k++] = m.covariance(a, i, j);
-                }
-            }
-        }
-        for (AxisEstimate e : r.axes()) {
-            all[k++] = e.diffusivity().value();
-            all[k++] = e.diffusivity().low();
-            all[k++] = e.diffusivity().high();
-            all[k++] = e.lagrangianTimeScale();
-        }
-        return all;
-    }
-
     @Test
     void sameSeedSameNumbersAcrossRunsThreadsAndSaveLoad() throws IOException {
-        Scenario original = ScenarioReader.parse(SCENARIO);
+        Scenario original = ScenarioReader.parse(ReachCase.SCENARIO);
         Path file = folder.resolve("reach.json");
         ScenarioWriter.write(original, file);
         Scenario reloaded = ScenarioReader.read(file);
 
-        double[] reference = numbers(simulate(original, 1));
-        assertArrayEquals(reference, numbers(simulate(original, 1)), 0.0, "second run, 1 thread");
-        assertArrayEquals(reference, numbers(simulate(original, 2)), 0.0, "2 threads");
-        assertArrayEquals(reference, numbers(simulate(original, 4)), 0.0, "4 threads");
-        assertArrayEquals(reference, numbers(simulate(reloaded, 2)), 0.0, "after save and load");
+        double[] reference = ReachCase.numbers(ReachCase.simulate(original, 1));
+        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 1)), 0.0, "second run, 1 thread");
+        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 2)), 0.0, "2 threads");
+        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 4)), 0.0, "4 threads");
+        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(reloaded, 2)), 0.0, "after save and load");
     }
 
     @Test
     void anotherSeedGivesOtherNumbers() {
-        Scenario a = ScenarioReader.parse(SCENARIO);
-        Scenario b = ScenarioReader.parse(SCENARIO.replace("20240611", "20240612"));
-        assertFalse(java.util.Arrays.equals(numbers(simulate(a, 1)), numbers(simulate(b, 1))));
+        Scenario a = ScenarioReader.parse(ReachCase.SCENARIO);
+        Scenario b = ScenarioReader.parse(ReachCase.SCENARIO.replace("20240611", "20240612"));
+        assertFalse(java.util.Arrays.equals(ReachCase.numbers(ReachCase.simulate(a, 1)), ReachCase.numbers(ReachCase.simulate(b, 1))));
     }
 
     @Test
     void everyOutputNamesTheVersionAndTheSeed() throws IOException {
         SimulationCache.shared().clear();
-        StudyResult r = Engine.run(ScenarioReader.parse(SCENARIO), 2, RunListener.NONE, new Cancellation());
+        StudyResult r = Engine.run(ScenarioReader.parse(ReachCase.SCENARIO), 2, RunListener.NONE, new Cancellation());
         String version = ToolVersion.get();
         assertFalse(version.isBlank());
 
