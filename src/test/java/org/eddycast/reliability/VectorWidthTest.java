@@ -3,17 +3,21 @@ package org.eddycast.reliability;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.eddycast.field.VectorSinCos;
 import org.eddycast.particles.KernelChoice;
+import org.eddycast.scenario.ScenarioReader;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The vector kernel gives the same numbers bit for bit whatever the machine's vector length: each particle's
@@ -24,6 +28,9 @@ import org.junit.jupiter.api.Test;
  */
 class VectorWidthTest {
 
+    @TempDir
+    Path folder;
+
     @Test
     void sameNumbersWithHalfTheVectorLength() throws IOException, InterruptedException {
         assumeTrue(KernelChoice.fastest() == KernelChoice.VECTOR, "the vector kernel runs here");
@@ -33,18 +40,22 @@ class VectorWidthTest {
         assumeTrue(bytes >= 32, "a narrower vector than this one still holds two doubles");
 
         String here = KernelChoice.fastest().newShearKernel().name();
-        double[] expected = ReachCase.numbers(ReachCase.simulate(
-                org.eddycast.scenario.ScenarioReader.parse(ReachCase.SCENARIO), 2));
+        double[] expected = ReachCase.numbers(ReachCase.simulate(ScenarioReader.parse(ReachCase.SCENARIO), 2));
 
+        Path output = folder.resolve("numbers.txt");
         Process child = new ProcessBuilder(
                 Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "--add-modules", "jdk.incubator.vector", "-XX:MaxVectorSize=" + bytes / 2, "-Xmx512m",
                 "-cp", System.getProperty("java.class.path"), VectorWidthRun.class.getName())
                 .redirectError(ProcessBuilder.Redirect.DISCARD)
+                .redirectOutput(output.toFile())
                 .start();
-        List<String> lines = new ArrayList<>(
-                new String(child.getInputStream().readAllBytes(), StandardCharsets.UTF_8).lines().toList());
-        assertEquals(true, child.waitFor(120, TimeUnit.SECONDS), "the second runtime finished");
+        boolean finished = child.waitFor(120, TimeUnit.SECONDS);
+        if (!finished) {
+            child.destroyForcibly();
+        }
+        assertTrue(finished, "the second runtime finished within two minutes");
+        List<String> lines = new ArrayList<>(Files.readAllLines(output, StandardCharsets.UTF_8));
         assertEquals(0, child.exitValue(), "the second runtime's exit status; its output: " + lines);
 
         String there = lines.remove(0);
