@@ -6,6 +6,7 @@ import org.eddycast.engine.Engine;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
 import org.eddycast.scenario.Scenario;
+import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.stats.AxisEstimate;
 import org.eddycast.stats.DisplacementMoments;
 
@@ -24,12 +25,22 @@ final class ReachCase {
                               "timeStep": 0.5, "duration": 60, "seed": 20240611 } }
             """;
 
-    static DiffusivityResult simulate(Scenario s, int threads) {
+    /** The case as a scenario. */
+    static Scenario scenario() {
+        return ScenarioReader.parse(SCENARIO);
+    }
+
+    /** Every number of a run of the scenario on the given number of threads. */
+    static double[] numbersOf(Scenario s, int threads) {
+        return numbers(simulate(s, threads));
+    }
+
+    private static DiffusivityResult simulate(Scenario s, int threads) {
         return DiffusivityStudy.run(Engine.dimensionlessCase(s), threads, RunListener.NONE, new Cancellation());
     }
 
     /** Every number the simulation produced: moments (mean and covariance) and per-axis estimates. */
-    static double[] numbers(DiffusivityResult r) {
+    private static double[] numbers(DiffusivityResult r) {
         DisplacementMoments m = r.moments();
         int n = m.records();
         double[] all = new double[m.axes() * n * (n + 1) + 4 * r.axes().size()];

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.eddycast.reliability.ReachCase.numbersOf;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -35,29 +36,29 @@ class ReproducibleResultsTest {
 
     @Test
     void sameSeedSameNumbersAcrossRunsThreadsAndSaveLoad() throws IOException {
-        Scenario original = ScenarioReader.parse(ReachCase.SCENARIO);
+        Scenario original = ReachCase.scenario();
         Path file = folder.resolve("reach.json");
         ScenarioWriter.write(original, file);
         Scenario reloaded = ScenarioReader.read(file);
 
-        double[] reference = ReachCase.numbers(ReachCase.simulate(original, 1));
-        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 1)), 0.0, "second run, 1 thread");
-        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 2)), 0.0, "2 threads");
-        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(original, 4)), 0.0, "4 threads");
-        assertArrayEquals(reference, ReachCase.numbers(ReachCase.simulate(reloaded, 2)), 0.0, "after save and load");
+        double[] reference = numbersOf(original, 1);
+        assertArrayEquals(reference, numbersOf(original, 1), 0.0, "second run, 1 thread");
+        assertArrayEquals(reference, numbersOf(original, 2), 0.0, "2 threads");
+        assertArrayEquals(reference, numbersOf(original, 4), 0.0, "4 threads");
+        assertArrayEquals(reference, numbersOf(reloaded, 2), 0.0, "after save and load");
     }
 
     @Test
     void anotherSeedGivesOtherNumbers() {
-        Scenario a = ScenarioReader.parse(ReachCase.SCENARIO);
+        Scenario a = ReachCase.scenario();
         Scenario b = ScenarioReader.parse(ReachCase.SCENARIO.replace("20240611", "20240612"));
-        assertFalse(java.util.Arrays.equals(ReachCase.numbers(ReachCase.simulate(a, 1)), ReachCase.numbers(ReachCase.simulate(b, 1))));
+        assertFalse(java.util.Arrays.equals(numbersOf(a, 1), numbersOf(b, 1)));
     }
 
     @Test
     void everyOutputNamesTheVersionAndTheSeed() throws IOException {
         SimulationCache.shared().clear();
-        StudyResult r = Engine.run(ScenarioReader.parse(ReachCase.SCENARIO), 2, RunListener.NONE, new Cancellation());
+        StudyResult r = Engine.run(ReachCase.scenario(), 2, RunListener.NONE, new Cancellation());
         String version = ToolVersion.get();
         assertFalse(version.isBlank());
 

@@ -1,7 +1,6 @@
 package org.eddycast.reliability;
 
 import org.eddycast.particles.KernelChoice;
-import org.eddycast.scenario.ScenarioReader;
 
 /**
  * Runs {@link ReachCase} on two threads and prints the kernel's name, then every number of the result as the
@@ -11,7 +10,7 @@ public final class VectorWidthRun {
 
     public static void main(String[] args) {
         System.out.println(KernelChoice.fastest().newShearKernel().name());
-        for (double v : ReachCase.numbers(ReachCase.simulate(ScenarioReader.parse(ReachCase.SCENARIO), 2))) {
+        for (double v : ReachCase.numbersOf(ReachCase.scenario(), 2)) {
             System.out.println(Long.toHexString(Double.doubleToRawLongBits(v)));
         }
     }

@@ -15,7 +15,6 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.eddycast.field.VectorSinCos;
 import org.eddycast.particles.KernelChoice;
-import org.eddycast.scenario.ScenarioReader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -40,7 +39,7 @@ class VectorWidthTest {
         assumeTrue(bytes >= 32, "a narrower vector than this one still holds two doubles");
 
         String here = KernelChoice.fastest().newShearKernel().name();
-        double[] expected = ReachCase.numbers(ReachCase.simulate(ScenarioReader.parse(ReachCase.SCENARIO), 2));
+        double[] expected = ReachCase.numbersOf(ReachCase.scenario(), 2);
 
         Path output = folder.resolve("numbers.txt");
         Process child = new ProcessBuilder(
