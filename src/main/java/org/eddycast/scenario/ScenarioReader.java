@@ -332,13 +332,19 @@ public final class ScenarioReader {
         Integrator integrator = Integrator.fromKey(s.choice("integrator", keys, "strang", false));
         double dt = s.number("timeStep", "s", 0, 1e9, true, Double.NaN, false);
         double duration = s.number("duration", "s", 0, 1e12, true, Double.NaN, false);
-        if (dt > 0 && duration > 0 && duration / dt < 2) {
-            s.problem(s.name("duration") + " must be at least two time steps (" + FieldReader.format(2 * dt)
-                    + " s); got " + FieldReader.format(duration));
+        if (dt > 0 && duration > 0 && !(duration / dt >= SimulationSettings.MIN_STEPS - 0.5)) {
+            s.problem(s.name("duration") + " must be at least " + SimulationSettings.MIN_STEPS + " time steps ("
+                    + FieldReader.format(SimulationSettings.MIN_STEPS * dt) + " s); got " + FieldReader.format(duration));
         }
-        if (dt > 0 && duration > 0 && duration / dt > 1e8) {
-            s.problem(s.name("timeStep") + " gives " + FieldReader.format(duration / dt)
-                    + " steps; at most 1e8 are allowed: raise the time step or shorten the duration");
+        if (dt > 0 && duration > 0 && duration / dt > SimulationSettings.MAX_STEPS + 0.5) {
+            s.problem(s.name("timeStep") + " gives " + FieldReader.format(duration / dt) + " steps; at most "
+                    + FieldReader.format(SimulationSettings.MAX_STEPS) + " are allowed: raise the time step or shorten "
+                    + "the duration");
+        }
+        if (group > particles) {
+            s.problem(s.name("groupSize") + " must be at most simulation.particles (" + particles + "): the particles "
+                    + "would be raised to whole groups, " + 2L * org.eddycast.particles.EnsembleRunner.blockSizeFor(group)
+                    + " at least; got " + group);
         }
         long seed = s.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE, 1, false);
         double target = s.number("precisionTarget", "(fraction)", 0, 0.5, true, Double.NaN, false);
