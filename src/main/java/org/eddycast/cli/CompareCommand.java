@@ -16,6 +16,7 @@ import org.eddycast.particles.Cancellation;
 import org.eddycast.report.OptionComparison;
 import org.eddycast.report.ResultJson;
 import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.scenario.Printable;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.stats.AxisEstimate;
 import picocli.CommandLine.Command;
@@ -56,9 +57,11 @@ final class CompareCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "%-48s %12s %12s %12s %s%n", "option", "D_x m^2/s", "D_y m^2/s", "D_z m^2/s",
                 "first mixing figure");
         for (StudyResult r : results) {
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-48.48s", r.scenario().name()));
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-48.48s",
+                    Printable.escape(r.scenario().name())));
             for (AxisEstimate a : r.diffusivity().axes()) {
-                row.append(String.format(Locale.ROOT, " %12.4g", a.diffusivity().value()));
+                row.append(a.determined() ? String.format(Locale.ROOT, " %12.4g", a.diffusivity().value())
+                        : String.format(Locale.ROOT, " %12s", "not determined"));
             }
             if (r.forecast() != null && !r.forecast().mixing().isEmpty()) {
                 var m = r.forecast().mixing().get(0);

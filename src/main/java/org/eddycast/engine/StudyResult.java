@@ -1,16 +1,22 @@
 package org.eddycast.engine;
 
 import java.time.Instant;
+import java.util.List;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TurbulenceStatistics;
 
 /**
  * Everything one scenario produced: the scenario itself, its resolved flow, the diffusivity result, the tool
- * version and when it finished, and the forecast in physical units.
+ * version and when it finished, the forecast in physical units (null when a diffusivity it needs is not
+ * determined), and the warnings shown before the run ({@link Engine#preflight}).
  */
 public record StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
-                          String toolVersion, Instant finished) {
+                          String toolVersion, Instant finished, List<String> preflight) {
+
+    public StudyResult {
+        preflight = List.copyOf(preflight);
+    }
 
     /** The turbulence statistics (null for a verification flow). */
     public TurbulenceStatistics turbulence() {
