@@ -66,6 +66,27 @@ public final class TextFiles {
         }
     }
 
+    /**
+     * Checks the start of a file that is read as a stream: a folder, UTF-16 or UTF-32 text or a binary file is
+     * refused before any line is parsed.
+     *
+     * @throws IOException naming the file and what it is instead of UTF-8 text
+     */
+    public static void checkStart(Path file, String what) throws IOException {
+        if (Files.isDirectory(file)) {
+            throw new IOException(file + " is a folder, not a " + what + ": name a file inside it");
+        }
+        byte[] head;
+        try (java.io.InputStream in = Files.newInputStream(file)) {
+            head = in.readNBytes(4096);
+        }
+        String other = foreignEncoding(head);
+        if (other != null) {
+            throw new IOException(file + " (" + what + ") is not UTF-8 text: it is " + other
+                    + "; save it as UTF-8 text");
+        }
+    }
+
     /** A description of a recognisably different encoding, or null when the bytes may be UTF-8. */
     static String foreignEncoding(byte[] b) {
         if (startsWith(b, 0x00, 0x00, 0xFE, 0xFF)) {
