@@ -107,6 +107,8 @@ public record SummaryContent(String title, String scenarioName, String route, St
         DiffusivityResult r = s.diffusivity();
         Forecast f = s.forecast();
         List<String> assumptions = new ArrayList<>(f != null ? f.assumptions() : s.flow().assumptions());
+        s.preflight().stream().filter(w -> !s.flow().warnings().contains(w))
+                .forEach(w -> assumptions.add("Warning (before the run): " + w));
         s.flow().warnings().forEach(w -> assumptions.add("Warning: " + w));
         r.warnings().forEach(w -> assumptions.add("Warning: " + w));
         r.notes().forEach(n -> assumptions.add("Note: " + n));
