@@ -101,7 +101,10 @@ public final class RecordReader {
         VelocityRecord record;
         try (Reader in = wrap.apply(Files.newBufferedReader(path, StandardCharsets.UTF_8))) {
             record = read(in, path.getFileName() == null ? path.toString() : path.getFileName().toString());
-        } catch (java.nio.charset.CharacterCodingException e) {
+        } catch (java.io.UncheckedIOException e) {
+            if (!(e.getCause() instanceof java.nio.charset.CharacterCodingException)) {
+                throw e;
+            }
             // not UTF-8 further in: the whole file says which byte and line
             try {
                 TextFiles.decodeUtf8(Files.readAllBytes(path), path + " (record file)");
@@ -148,6 +151,9 @@ public final class RecordReader {
             while ((text = lines.readLine()) != null) {
                 parser.accept(text);
             }
+        } catch (java.nio.charset.CharacterCodingException e) {
+            // the file reader names the encoding (read(Path) catches this)
+            throw new java.io.UncheckedIOException(e);
         } catch (IOException e) {
             throw new RecordFormatException(parser.lineNo + 1, 0, "could not read the record: " + e.getMessage());
         }

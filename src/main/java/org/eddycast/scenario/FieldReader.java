@@ -155,6 +155,12 @@ final class FieldReader {
             return fallback;
         }
         double x = v.asDouble();
+        if (x != 0 && Math.abs(x) < Double.MIN_NORMAL) {
+            // a subnormal number has lost its precision, and products of it underflow to zero further on
+            problems.add(name(field) + " " + format(x) + " is too small to compute with (below "
+                    + format(Double.MIN_NORMAL) + "); check its unit: it must be " + range(min, max, openMin, unit));
+            return fallback;
+        }
         boolean below = openMin ? !(x > min) : !(x >= min);
         if (below || !(x <= max)) {
             problems.add(name(field) + " must be " + range(min, max, openMin, unit) + "; got " + format(x));

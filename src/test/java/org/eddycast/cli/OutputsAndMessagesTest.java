@@ -153,6 +153,42 @@ class OutputsAndMessagesTest {
     }
 
     @Test
+    void analyzeWritesNothingThatRunWouldRefuse(@TempDir Path dir) throws IOException {
+        // the demo record with its time column stretched 1e300-fold: an integral length near 1e299 m
+        StringBuilder slow = new StringBuilder();
+        for (String line : Files.readAllLines(Path.of("presets/records/flume-probe.csv"))) {
+            String[] cells = line.split(",", 2);
+            slow.append(cells.length == 2 && cells[0].matches("[0-9.]+")
+                    ? Double.parseDouble(cells[0]) * 1e300 + "," + cells[1] : line).append('\n');
+        }
+        Path record = Files.writeString(dir.resolve("slow.csv"), slow);
+        Path flow = dir.resolve("flow.json");
+        CommandLineTest.Outcome o = run("analyze", record.toString(), "--json", flow.toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("are outside what run accepts, so nothing is written: flow.integralLength must "
+                + "be between 0 (exclusive) and 100000 m"), o.err());
+        assertFalse(Files.exists(flow));
+        assertTrue(o.out().contains("integral length"), "the analysis itself is still printed");
+    }
+
+    @Test
+    void aRecordInAnotherEncodingIsNamed(@TempDir Path dir) throws IOException {
+        String text = Files.readString(Path.of("presets/records/flume-probe.csv"));
+        Path utf16 = Files.write(dir.resolve("probe16.csv"), text.getBytes(java.nio.charset.StandardCharsets.UTF_16));
+        CommandLineTest.Outcome o = run("analyze", utf16.toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("is not UTF-8 text: it is UTF-16 text (big-endian byte-order mark FE FF)"), o.err());
+        Path latin = Files.write(dir.resolve("probe1.csv"), ("# Messung \u00e4\n" + text)
+                .getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+        o = run("analyze", latin.toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("byte 0xE4 on line 1 is not valid UTF-8"), o.err());
+        o = run("analyze", dir.toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("is a folder, not a record file"), o.err());
+    }
+
+    @Test
     void outOfMemoryIsAPlainMessage() {
         assertTrue(Main.outOfMemory(new RuntimeException(new java.util.concurrent.ExecutionException(
                 new OutOfMemoryError("Java heap space")))));

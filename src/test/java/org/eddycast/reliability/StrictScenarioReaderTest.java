@@ -127,6 +127,15 @@ class StrictScenarioReaderTest {
     }
 
     @Test
+    void subnormalNumbersAreRefusedByTheFieldNotBlamedOnAnother() {
+        String velocity = refusal(String.format(DIRECT, "").replace("\"rmsVelocity\": 0.1", "\"rmsVelocity\": 1e-310"));
+        assertTrue(velocity.startsWith("flow.rmsVelocity 1e-310 is too small to compute with"), velocity);
+        String length = refusal(String.format(DIRECT, "").replace("\"integralLength\": 0.5",
+                "\"integralLength\": 1e-310"));
+        assertTrue(length.startsWith("flow.integralLength 1e-310 is too small to compute with"), length);
+    }
+
+    @Test
     void theRangeOfASlopeIsTheRangeAccepted() {
         String m = refusal(CHANNEL.formatted("").replace("\"shearVelocity\": 0.05", "\"bedSlope\": 1"));
         assertTrue(m.contains("flow.bedSlope must be between 0 and 1 (both exclusive) m/m; got 1"), m);
