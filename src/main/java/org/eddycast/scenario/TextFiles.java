@@ -102,20 +102,21 @@ public final class TextFiles {
             return "UTF-16 text (little-endian byte-order mark FF FE)";
         }
         int zeros = 0;
-        int zerosAtOdd = 0;
-        int zerosAtEven = 0;
+        int[] zerosAt = new int[4];
         for (int i = 0; i < b.length; i++) {
             if (b[i] == 0) {
                 zeros++;
-                if ((i & 1) == 0) {
-                    zerosAtEven++;
-                } else {
-                    zerosAtOdd++;
-                }
+                zerosAt[i & 3]++;
             }
         }
         if (zeros == 0) {
             return null;
+        }
+        int zerosAtEven = zerosAt[0] + zerosAt[2];
+        int zerosAtOdd = zerosAt[1] + zerosAt[3];
+        // ASCII in UTF-32 is three zeros and one character in every four bytes
+        if (zeros * 8 >= b.length * 5 && zerosAt[1] > 0 && zerosAt[2] > 0 && (zerosAt[3] == 0 || zerosAt[0] == 0)) {
+            return "UTF-32 text without a byte-order mark (" + (zerosAt[3] == 0 ? "big" : "little") + "-endian)";
         }
         // ASCII in UTF-16 puts a zero beside every character: all zeros on one parity, about half the bytes
         if (zeros * 3 >= b.length && (zerosAtOdd == 0 || zerosAtEven == 0)) {
