@@ -62,6 +62,15 @@ class RunSizeTest {
     }
 
     @Test
+    void theShortestRunAllowedGivesAnEstimate() {
+        // 16 steps: both windows of the estimator, [T/4, T/2] and [T/2, T], hold records (2 steps did not)
+        org.eddycast.engine.StudyResult r = Engine.run(ScenarioReader.parse(DIRECT.formatted("1",
+                "\"particles\": 256, \"modes\": 8, \"timeStep\": 0.01, \"duration\": 0.16")), 2,
+                org.eddycast.particles.RunListener.NONE, new org.eddycast.particles.Cancellation());
+        assertEquals(16, r.diffusivity().steps());
+    }
+
+    @Test
     void particlesRaisedToWholeBlocksAreNotedAndAGroupLargerThanTheRunIsRefused() {
         DimensionlessCase c = Engine.dimensionlessCase(ScenarioReader.parse(DIRECT.formatted("1",
                 "\"particles\": 1000, \"groupSize\": 64")));
