@@ -107,9 +107,9 @@ public record SummaryContent(String title, String scenarioName, String route, St
         DiffusivityResult r = s.diffusivity();
         Forecast f = s.forecast();
         List<String> assumptions = new ArrayList<>(f != null ? f.assumptions() : s.flow().assumptions());
-        s.preflight().stream().filter(w -> !s.flow().warnings().contains(w))
-                .forEach(w -> assumptions.add("Warning (before the run): " + w));
-        s.flow().warnings().forEach(w -> assumptions.add("Warning: " + w));
+        s.preflight().forEach(w -> assumptions.add("Warning (before the run): " + w));
+        s.flow().warnings().stream().filter(w -> !s.preflight().contains(w))
+                .forEach(w -> assumptions.add("Warning: " + w));
         r.warnings().forEach(w -> assumptions.add("Warning: " + w));
         r.notes().forEach(n -> assumptions.add("Note: " + n));
         if (f == null) {

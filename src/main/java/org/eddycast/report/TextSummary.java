@@ -50,7 +50,9 @@ public final class TextSummary {
             }
         }
         for (String w : s.flow().warnings()) {
-            sb.append("  WARNING (flow): ").append(w).append('\n');
+            if (!s.preflight().contains(w)) {
+                sb.append("  WARNING (flow): ").append(w).append('\n');
+            }
         }
         Forecast f = s.forecast();
         if (f == null) {
