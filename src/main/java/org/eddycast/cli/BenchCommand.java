@@ -61,6 +61,11 @@ final class BenchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        if (answer && json != null) {
+            throw new IllegalArgumentException("--json applies to the throughput figures only: leave it out with "
+                    + "--answer, whose one line goes to standard output");
+        }
+        new OutputPlan().output("--json", json).check();
         int threadCount = threads.resolve();
         if (answer) {
             long cpuStart = Benchmark.processCpuNanos();
@@ -93,7 +98,8 @@ final class BenchCommand implements Callable<Integer> {
                     f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
-        if (json != null) {
+        Saves saves = new Saves(out);
+        saves.save("figures", json, () -> {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             ObjectNode root = mapper.createObjectNode();
             ArrayNode results = root.putArray("results");
@@ -114,9 +120,8 @@ final class BenchCommand implements Callable<Integer> {
                 d.put("high", f.high());
             }
             AtomicFiles.writeString(json, mapper.writeValueAsString(root));
-            out.println("figures written to " + json);
-        }
-        return 0;
+        });
+        return saves.finish(spec.commandLine().getErr());
     }
 
     private static int checked(int value, String option) {

@@ -48,6 +48,17 @@ class OutputsAndMessagesTest {
     }
 
     @Test
+    void theBenchmarkChecksItsOutputBeforeMeasuring(@TempDir Path dir) {
+        CommandLineTest.Outcome o = run("bench", "--json", dir.resolve("missing/b.json").toString());
+        assertEquals(2, o.status());
+        assertTrue(o.err().contains("does not exist"), o.err());
+        assertEquals("", o.out(), "nothing was measured");
+        CommandLineTest.Outcome answer = run("bench", "--answer", "--json", dir.resolve("b.json").toString());
+        assertEquals(2, answer.status());
+        assertTrue(answer.err().contains("--json applies to the throughput figures only"), answer.err());
+    }
+
+    @Test
     void anOutputNeverReplacesAnInputNorAnotherOutput(@TempDir Path dir) throws IOException {
         Path scenario = cheapScenario(dir, "s.json");
         byte[] before = Files.readAllBytes(scenario);
