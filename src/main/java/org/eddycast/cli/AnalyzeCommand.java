@@ -107,7 +107,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         a.fit().ifPresent(f -> out.println("  inertial range: " + f.describe()));
         out.println("  derived:");
         for (Derivation d : a.derivations()) {
-            out.printf(Locale.ROOT, "    %-28s %11.4g %-8s %s [%s]%n", d.quantity(), d.value(), d.unit(), d.rule(),
+            // a value the record cannot give (no inertial range, say) is not printed as a number
+            String value = Double.isFinite(d.value()) ? String.format(Locale.ROOT, "%11.4g", d.value())
+                    : "not determined";
+            out.printf(Locale.ROOT, "    %-28s %11s %-8s %s [%s]%n", d.quantity(), value, d.unit(), d.rule(),
                     d.source());
         }
         for (String w : a.warnings()) {
