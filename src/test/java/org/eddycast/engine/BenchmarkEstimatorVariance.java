@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
@@ -85,6 +83,21 @@ public final class BenchmarkEstimatorVariance {
 
     /** Slope weights over all records (zero outside [start, end]): ordinary, or with the model covariance. */
     static double[] weights(double[] times, double start, double end, boolean model) {
+        double[][] weighting = new double[times.length][times.length];
+        for (int a = 0; a < times.length; a++) {
+            for (int b = 0; b < times.length; b++) {
+                double t = Math.min(times[a], times[b]);
+                weighting[a][b] = model ? t * t : (a == b ? 1 : 0);
+            }
+        }
+        return weights(times, start, end, weighting);
+    }
+
+    /**
+     * Generalized least-squares slope weights w = e2' (X' C^-1 X)^-1 X' C^-1 for c + s t over the records in
+     * [start, end], C the weighting restricted to them plus a ridge of 1e-6 of its mean diagonal; zero outside.
+     */
+    static double[] weights(double[] times, double start, double end, double[][] weighting) {
         List<Integer> in = new ArrayList<>();
         for (int j = 0; j < times.length; j++) {
             if (times[j] >= start - 1e-12 * end && times[j] <= end + 1e-12 * end) {
@@ -92,17 +105,21 @@ public final class BenchmarkEstimatorVariance {
             }
         }
         int r = in.size();
-        RealMatrix weighting = new Array2DRowRealMatrix(r, r);
+        RealMatrix c = new Array2DRowRealMatrix(r, r);
         RealMatrix x = new Array2DRowRealMatrix(r, 2);
+        double trace = 0;
         for (int a = 0; a < r; a++) {
             for (int b = 0; b < r; b++) {
-                double t = Math.min(times[in.get(a)], times[in.get(b)]);
-                weighting.setEntry(a, b, model ? t * t : (a == b ? 1 : 0));
+                c.setEntry(a, b, weighting[in.get(a)][in.get(b)]);
             }
+            trace += c.getEntry(a, a);
             x.setEntry(a, 0, 1);
             x.setEntry(a, 1, times[in.get(a)]);
         }
-        RealMatrix cInvX = new LUDecomposition(weighting).getSolver().solve(x);
+        for (int a = 0; a < r; a++) {
+            c.addToEntry(a, a, 1e-6 * trace / r);
+        }
+        RealMatrix cInvX = new LUDecomposition(c).getSolver().solve(x);
         RealMatrix normalInverse = new LUDecomposition(x.transpose().multiply(cInvX)).getSolver().getInverse();
         RealVector w = cInvX.multiply(normalInverse).getColumnVector(1);
         double[] all = new double[times.length];
@@ -167,57 +184,29 @@ public final class BenchmarkEstimatorVariance {
     }
 
     /**
-     * Half the generalized least-squares slope of c + s t over the records in [start, end]: weighted with the
-     * sample covariance of the blocks' curves (plus a ridge of 1e-6 of its mean diagonal), or, for
-     * {@code model}, with the covariance of a diffusive curve, Cov(X_s^2, X_t^2) = 2 Cov(X_s, X_t)^2, which is
-     * proportional to min(s, t)^2 for a Gaussian displacement with independent increments. The standard error
-     * is always that of the weights applied to the sample covariance, so model weights keep an honest interval.
+     * Half the generalized least-squares slope over [start, end]: weighted with the sample covariance of the
+     * blocks' curves, or, for {@code model}, with the covariance of a diffusive curve,
+     * Cov(X_s^2, X_t^2) = 2 Cov(X_s, X_t)^2, proportional to min(s, t)^2 for a Gaussian displacement with
+     * independent increments. The standard error is always that of the weights applied to the sample
+     * covariance, so model weights keep an honest interval.
      */
     static Estimate generalized(DisplacementMoments m, int axis, double start, double end, boolean model) {
-        List<Integer> in = new ArrayList<>();
-        for (int j = 0; j < m.records(); j++) {
-            double t = m.time(j);
-            if (t >= start - 1e-12 * end && t <= end + 1e-12 * end) {
-                in.add(j);
-            }
-        }
-        int r = in.size();
-        RealMatrix cov = new Array2DRowRealMatrix(r, r);
-        double trace = 0;
+        int r = m.records();
+        double[][] cov = new double[r][r];
         for (int a = 0; a < r; a++) {
             for (int b = 0; b < r; b++) {
-                cov.setEntry(a, b, m.covariance(axis, in.get(a), in.get(b)));
-            }
-            trace += cov.getEntry(a, a);
-        }
-        for (int a = 0; a < r; a++) {
-            cov.addToEntry(a, a, 1e-6 * trace / r);
-        }
-        RealMatrix weighting = cov;
-        if (model) {
-            weighting = new Array2DRowRealMatrix(r, r);
-            for (int a = 0; a < r; a++) {
-                for (int b = 0; b < r; b++) {
-                    double t = Math.min(m.time(in.get(a)), m.time(in.get(b)));
-                    weighting.setEntry(a, b, t * t);
-                }
+                cov[a][b] = m.covariance(axis, a, b);
             }
         }
-        RealMatrix x = new Array2DRowRealMatrix(r, 2);
-        RealVector y = new ArrayRealVector(r);
+        double[] w = model ? weights(m.times(), start, end, true) : weights(m.times(), start, end, cov);
+        double slope = 0;
+        double variance = 0;
         for (int a = 0; a < r; a++) {
-            x.setEntry(a, 0, 1);
-            x.setEntry(a, 1, m.time(in.get(a)));
-            y.setEntry(a, m.mean(axis, in.get(a)));
+            slope += w[a] * m.mean(axis, a);
+            for (int b = 0; b < r; b++) {
+                variance += w[a] * w[b] * cov[a][b];
+            }
         }
-        DecompositionSolver solver = new LUDecomposition(weighting).getSolver();
-        RealMatrix cInvX = solver.solve(x);
-        RealMatrix normal = x.transpose().multiply(cInvX);
-        RealMatrix normalInverse = new LUDecomposition(normal).getSolver().getInverse();
-        // weights w = e2' (X' C^-1 X)^-1 X' C^-1: the slope is w . y
-        RealVector w = cInvX.multiply(normalInverse).getColumnVector(1);
-        double slope = w.dotProduct(y);
-        double variance = w.dotProduct(cov.operate(w)) / m.count();
-        return new Estimate(0.5 * slope, 0.5 * Math.sqrt(Math.max(variance, 0)));
+        return new Estimate(0.5 * slope, 0.5 * Math.sqrt(Math.max(variance, 0) / m.count()));
     }
 }
