@@ -36,19 +36,31 @@ final class SelfCheckPanel extends JPanel {
     private Worker worker;
 
     SelfCheckPanel(List<VerificationCase> cases, int threads) {
-        super(new MigLayout("insets dialog, wrap 2, fill", "[grow,fill][]", "[grow,fill][]"));
+        super(new MigLayout("insets dialog, wrap 3, fill", "[grow,fill][][]", "[grow,fill][]"));
         this.cases = List.copyOf(cases);
         this.threads = threads;
         JTable table = new JTable(model);
         table.setName("selfCheck");
-        add(new JScrollPane(table), "span, w 820, h 220");
+        add(new JScrollPane(table), "span, w 300:820, h 220");
         bar.setStringPainted(true);
         bar.setString(this.cases.size() + " cases to run");
         add(bar);
         JButton stop = new JButton("Stop");
         stop.setMnemonic('S');
         stop.addActionListener(e -> stop());
-        add(stop);
+        add(stop, "sizegroup b");
+        JButton close = new JButton("Close");
+        close.setMnemonic('C');
+        close.setName("close");
+        close.addActionListener(e -> closer.run());
+        add(close, "sizegroup b");
+    }
+
+    private Runnable closer = () -> { };
+
+    /** What Close does: the dialog sets it to close itself (which also stops the run). */
+    void setCloser(Runnable r) {
+        closer = r;
     }
 
     /** Starts the cases in the background. */
