@@ -373,6 +373,7 @@ public record SummaryContent(String title, String scenarioName, String route, St
                 ""));
         rows.add(row("molecular diffusivity D0", sc.substance().molecularDiffusivity(), "m\u00b2/s"));
         rows.add(row("mass released", sc.release().mass(), "kg"));
+        rows.add(new Row("release point", releasePoint(sc), "", ""));
         if (!Double.isNaN(sc.release().rate())) {
             rows.add(row("release rate", sc.release().rate(), "kg/s"));
         }
@@ -380,6 +381,19 @@ public record SummaryContent(String title, String scenarioName, String route, St
         rows.add(row("particles", sc.simulation().particles(), "-"));
         rows.add(new Row("seed", Long.toString(sc.simulation().seed()), "", "-"));
         return rows;
+    }
+
+    /** Where the tracer is released, in words: the bank or the centre-line of a channel, a point in a tank. */
+    static String releasePoint(Scenario sc) {
+        if (sc.flow() instanceof ChannelFlow) {
+            return sc.release().atBank() ? "at the bank" : "on the centre-line";
+        }
+        double[] p = sc.release().position();
+        if (sc.flow() instanceof TankFlow) {
+            return p == null ? "centre of the tank" : String.format(Locale.ROOT, "x %s, y %s, z %s m from a corner",
+                    number(p[0]), number(p[1]), number(p[2]));
+        }
+        return "a point in open water";
     }
 
     private static List<Row> results(StudyResult s) {

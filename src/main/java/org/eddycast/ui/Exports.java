@@ -19,8 +19,6 @@ import org.eddycast.plugin.HostContext;
 import org.eddycast.sheet.ChartRendering;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.CurveCsv;
-import org.eddycast.report.SummaryContent;
-import org.eddycast.sheet.SummarySheetLayout;
 import org.eddycast.sheet.SummarySheetPdf;
 import org.eddycast.sheet.SummarySheetPrintable;
 import org.eddycast.scenario.AtomicFiles;
@@ -89,8 +87,7 @@ final class Exports {
         return needingResult(EddycastPanel.action("Print summary sheet\u2026", KeyEvent.VK_P, null,
                 () -> withResult(r -> {
             PrinterJob job = PrinterJob.getPrinterJob();
-            job.setPrintable(new SummarySheetPrintable(new SummarySheetLayout(SummaryContent.of(r),
-                    SummarySheetPdf.defaultCharts(r))));
+            job.setPrintable(new SummarySheetPrintable(SummarySheetPdf.layout(r)));
             if (job.printDialog()) {
                 try {
                     job.print();
