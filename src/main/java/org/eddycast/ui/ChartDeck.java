@@ -40,7 +40,7 @@ final class ChartDeck extends JPanel {
         JPanel top = new JPanel(new MigLayout("insets 4 8 0 8", "[][grow]"));
         JLabel show = new JLabel("Show:");
         show.setLabelFor(chooser);
-        show.setDisplayedMnemonic('H');
+        show.setDisplayedMnemonic('W');
         top.add(show);
         top.add(chooser);
         add(top, BorderLayout.NORTH);

@@ -271,6 +271,18 @@ class PanelRunTest {
         // the long message wraps inside the form: the form is no wider at 1024 x 700 than the room it has
         noLabelCutOff(holder[0], "light", ResultsView.CURVES_TAB);
         shot(holder[0], "form-two-errors-light", SMALL);
+        EddycastPanel[] dark = new EddycastPanel[1];
+        onEdt(() -> {
+            setTheme("dark");
+            dark[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test6")));
+            dark[0].showScenario(ScenarioReader.parse(org.eddycast.sheet.ForecastSheetTest.CHANNEL), tmp,
+                    "channel.json");
+            dark[0].form().setValue("flow.depth", "-1.2");
+            dark[0].form().setValue("flow.width", "six");
+        });
+        shot(dark[0], "form-two-errors-dark", SMALL);
+        onEdt(() -> setTheme("light"));
         Preferences.userRoot().node("org/eddycast/ui-test6").removeNode();
     }
 
