@@ -424,14 +424,7 @@ public final class EddycastPanel implements ToolPanel {
         unlock();
         progress.setValue(0);
         progress.setString("Cancelled");
-        if (lastResult != null) {
-            results.showResult(lastResult);
-            if (changedSinceResult) {
-                results.showStale("the run with the new inputs was cancelled");
-            }
-        } else {
-            results.showEmpty();
-        }
+        showLastResult("the run with the new inputs was cancelled");
         host.showStatus("Run cancelled");
     }
 
@@ -460,6 +453,7 @@ public final class EddycastPanel implements ToolPanel {
         } catch (ExecutionException e) {
             Throwable cause = e.getCause();
             progress.setValue(0);
+            showLastResult("the run with the new inputs did not finish");
             if (cause instanceof RunCancelledException) {
                 progress.setString("Cancelled");
                 return;
@@ -477,6 +471,18 @@ public final class EddycastPanel implements ToolPanel {
             host.showStatus("Run failed: " + what);
         } catch (java.util.concurrent.CancellationException e) {
             progress.setString("Cancelled");
+        }
+    }
+
+    /** Shows the last finished result again after a run that did not finish, marked if the form moved on. */
+    private void showLastResult(String why) {
+        if (lastResult == null) {
+            results.showEmpty();
+            return;
+        }
+        results.showResult(lastResult);
+        if (changedSinceResult) {
+            results.showStale(why);
         }
     }
 

@@ -70,6 +70,7 @@ final class ResultsView extends JPanel {
     private final HeadlinePanel headline = new HeadlinePanel();
     private final OptionsView options = new OptionsView();
     private boolean movedToQuality;
+    private boolean hasResult;
 
     ResultsView() {
         super(new BorderLayout());
@@ -205,6 +206,7 @@ final class ResultsView extends JPanel {
     }
 
     void showEmpty() {
+        hasResult = false;
         banner.setText(" ");
         stale.setVisible(false);
         headline.show(null, "No result yet: fill in the form and press Run (Ctrl+R).");
@@ -233,6 +235,12 @@ final class ResultsView extends JPanel {
 
     void showRunning(String status) {
         banner.setText(status);
+        if (hasResult) {
+            stale.setText("A new run is going: the answer below is the previous result's.");
+            stale.setVisible(true);
+        } else {
+            headline.show(null, "The answer appears here when the run finishes.");
+        }
         // the forecast tabs stay empty until the end: show the curves that fill in meanwhile
         if (tabs.getSelectedIndex() < QUALITY_TAB) {
             tabs.setSelectedIndex(QUALITY_TAB);
@@ -254,6 +262,7 @@ final class ResultsView extends JPanel {
             tabs.setSelectedIndex(CURVES_TAB);
         }
         movedToQuality = false;
+        hasResult = true;
         stale.setVisible(false);
         DiffusivityResult r = s.diffusivity();
         SpreadCurves c = SpreadCurves.of(r);

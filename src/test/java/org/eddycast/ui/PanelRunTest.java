@@ -81,8 +81,9 @@ class PanelRunTest {
         });
         Preferences prefs = Preferences.userRoot().node("org/eddycast/ui-test");
         EddycastPanel[] holder = new EddycastPanel[1];
+        TestHost host = new TestHost();
         onEdt(() -> {
-            holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(), new UiPreferences(prefs));
+            holder[0] = new EddycastPanel(host, new TestDialogs(), new UiPreferences(prefs));
             holder[0].setThreads(2);
             holder[0].showScenario(BundledPresets.standard(), BundledPresets.folder(), "mixing-tank-dose.json");
         });
@@ -92,7 +93,12 @@ class PanelRunTest {
         // set fields as a user would
         onEdt(() -> panel.form().setValue("flow.rmsVelocity", "0.05"));
         onEdt(() -> assertTrue(panel.form().lastCheck().valid(), () -> panel.form().lastCheck().toString()));
+        onEdt(() -> assertFalse(host.action("Export summary sheet (PDF)\u2026").isEnabled(), "no result, no export"));
+        onEdt(() -> assertTrue(host.action("Open recent").getValue(HostContext.SUBMENU_ITEMS) != null,
+                "open recent is a submenu"));
         runAndWait(panel, null);
+        onEdt(() -> assertTrue(host.action("Export summary sheet (PDF)\u2026").isEnabled(), "a result to export"));
+        onEdt(() -> assertFalse(host.action("Export options sheet (PDF)\u2026").isEnabled(), "no options yet"));
         shot(panel, "results", theme);
         List<List<String>> rows = callEdt(() -> panel.results().tableRows());
         assertEquals("eddy diffusivity along x", rows.get(0).get(0));
@@ -146,6 +152,10 @@ class PanelRunTest {
                 "channel.json"));
         runAndWait(panel, null);
         assertEquals("", callEdt(() -> panel.results().staleText()), "a new result is current");
+        // the same case again: the engine reuses the simulation, and the window says so rather than a run time
+        runAndWait(panel, null);
+        assertEquals("Done: reused an identical earlier simulation", callEdt(panel::progressText));
+        assertTrue(callEdt(() -> panel.results().bannerText()).contains("reused an identical earlier simulation"));
         String headline = callEdt(() -> panel.results().headlineText());
         assertEquals(org.eddycast.report.Headline.of(panel.lastResult()).text(), headline);
         assertTrue(headline.startsWith("Distance to mixed"), headline);
@@ -559,6 +569,13 @@ class PanelRunTest {
     }
 
     static final class TestHost implements HostContext {
+        final List<Action> contributed = new CopyOnWriteArrayList<>();
+
+        /** A contributed action by its name. */
+        Action action(String name) {
+            return contributed.stream().filter(a -> name.equals(a.getValue(Action.NAME))).findFirst().orElseThrow();
+        }
+
         @Override
         public void showStatus(String text) {
         }
@@ -579,6 +596,7 @@ class PanelRunTest {
 
         @Override
         public void contributeMenu(String title, List<Action> actions) {
+            actions.stream().filter(a -> a != null).forEach(contributed::add);
         }
 
         @Override
