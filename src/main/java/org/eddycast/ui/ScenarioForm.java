@@ -328,10 +328,7 @@ public final class ScenarioForm extends JPanel {
         int i = text.indexOf(name);
         while (i >= 0) {
             int end = i + name.length();
-            boolean startOk = i == 0 || !Character.isLetterOrDigit(text.charAt(i - 1)) && text.charAt(i - 1) != '.';
-            boolean endOk = end == text.length() || !Character.isLetterOrDigit(text.charAt(end))
-                    && text.charAt(end) != '.';
-            if (startOk && endOk) {
+            if (standsAlone(text, i, end)) {
                 sb.append(text, from, i).append(label);
                 from = end;
             }
@@ -361,14 +358,19 @@ public final class ScenarioForm extends JPanel {
         return best;
     }
 
+    /** Whether text[start, end) is a whole name: not part of a longer word or of a dotted path. */
+    private static boolean standsAlone(String text, int start, int end) {
+        boolean startOk = start == 0 || !Character.isLetterOrDigit(text.charAt(start - 1))
+                && text.charAt(start - 1) != '.';
+        boolean endOk = end == text.length() || !Character.isLetterOrDigit(text.charAt(end))
+                && text.charAt(end) != '.';
+        return startOk && endOk;
+    }
+
     private static boolean mentions(String text, String name) {
         int i = text.indexOf(name);
         while (i >= 0) {
-            int end = i + name.length();
-            boolean startOk = i == 0 || !Character.isLetterOrDigit(text.charAt(i - 1)) && text.charAt(i - 1) != '.';
-            boolean endOk = end == text.length() || !Character.isLetterOrDigit(text.charAt(end))
-                    && text.charAt(end) != '.';
-            if (startOk && endOk) {
+            if (standsAlone(text, i, i + name.length())) {
                 return true;
             }
             i = text.indexOf(name, i + 1);

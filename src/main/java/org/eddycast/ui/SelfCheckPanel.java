@@ -6,10 +6,7 @@ import java.util.Locale;
 import javax.swing.JButton;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import javax.swing.JScrollPane;
-import javax.swing.JTable;
 import javax.swing.SwingWorker;
-import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.eddycast.engine.VerificationCase;
 import org.eddycast.engine.VerificationSuite;
@@ -22,13 +19,10 @@ import org.eddycast.particles.Cancellation;
  */
 final class SelfCheckPanel extends JPanel {
 
-    private final DefaultTableModel model = new DefaultTableModel(new Object[] {"case", "expected", "computed",
-            "deviation (standard errors)", "outcome", "source"}, 0) {
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return false;
-        }
-    };
+    private static final List<String> HEADER = List.of("case", "expected", "computed",
+            "deviation (standard errors)", "outcome", "source");
+    private final TextTable table = new TextTable("selfCheck");
+    private final List<List<String>> shown = new ArrayList<>();
     private final JProgressBar bar = new JProgressBar(0, 1000);
     private final Cancellation cancel = new Cancellation();
     private final List<VerificationCase> cases;
@@ -39,9 +33,9 @@ final class SelfCheckPanel extends JPanel {
         super(new MigLayout("insets dialog, wrap 3, fill", "[grow,fill][][]", "[grow,fill][]"));
         this.cases = List.copyOf(cases);
         this.threads = threads;
-        JTable table = new JTable(model);
-        table.setName("selfCheck");
-        add(new JScrollPane(table), "span, w 300:820, h 220");
+        table.show(new org.eddycast.report.SummaryContent.Table(HEADER, shown));
+        // every cell in full: the columns take their widest line and the table scrolls sideways
+        add(table.scroll(), "span, w 300:820, h 220");
         bar.setStringPainted(true);
         bar.setString(this.cases.size() + " cases to run");
         add(bar);
@@ -84,15 +78,7 @@ final class SelfCheckPanel extends JPanel {
 
     /** The table's rows as text. */
     List<List<String>> rows() {
-        List<List<String>> rows = new ArrayList<>();
-        for (int r = 0; r < model.getRowCount(); r++) {
-            List<String> row = new ArrayList<>();
-            for (int c = 0; c < model.getColumnCount(); c++) {
-                row.add(String.valueOf(model.getValueAt(r, c)));
-            }
-            rows.add(row);
-        }
-        return rows;
+        return table.rows();
     }
 
     String statusText() {
@@ -117,7 +103,10 @@ final class SelfCheckPanel extends JPanel {
 
         @Override
         protected void process(List<Object[]> rows) {
-            rows.forEach(model::addRow);
+            for (Object[] r : rows) {
+                shown.add(java.util.Arrays.stream(r).map(String::valueOf).toList());
+            }
+            table.show(new org.eddycast.report.SummaryContent.Table(HEADER, shown));
             bar.setValue(getProgress() * 10);
         }
 

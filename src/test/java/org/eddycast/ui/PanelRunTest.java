@@ -166,6 +166,22 @@ class PanelRunTest {
         for (int tab = 0; tab < ResultsView.OPTIONS_TAB; tab++) {
             noLabelCutOff(panel, theme, tab);
         }
+        if (theme.equals("light")) {
+            // a switch of theme (View menu) redraws the charts in the new theme's colours
+            onEdt(() -> {
+                panel.results().tabs().setSelectedIndex(ResultsView.CURVES_TAB);
+                FlatDarkLaf.setup();
+                SwingUtilities.updateComponentTreeUI(panel.component());
+                org.jfree.chart.ChartPanel chart = find(panel.component(), org.jfree.chart.ChartPanel.class);
+                assertEquals(javax.swing.UIManager.getColor("Panel.background"), chart.getChart()
+                        .getBackgroundPaint(), "the chart follows the theme");
+            });
+            shot(panel, "theme-switched-dark");
+            onEdt(() -> {
+                FlatLightLaf.setup();
+                SwingUtilities.updateComponentTreeUI(panel.component());
+            });
+        }
         List<List<String>> handbook = callEdt(() -> panel.results().handbookRows());
         assertEquals(panel.lastResult().forecast().handbook().size(), handbook.size());
         assertTrue(handbook.get(1).get(1).startsWith("eps_t = 0.15 h u*"), handbook.get(1).toString());
@@ -408,6 +424,27 @@ class PanelRunTest {
         assertTrue(Math.abs(Double.parseDouble(rows.get(0).get(3))) < 3, rows.get(0).toString());
         assertTrue(rows.get(0).get(4).contains("more than 3%"), rows.get(0).toString());
         assertTrue(callEdt(holder[0]::statusText).startsWith("All 1 cases run"));
+        boolean[] closed = new boolean[1];
+        onEdt(() -> {
+            holder[0].setCloser(() -> closed[0] = true);
+            javax.swing.JButton close = find(holder[0], javax.swing.JButton.class) == null ? null
+                    : java.util.Arrays.stream(holder[0].getComponents()).filter(c -> "close".equals(c.getName()))
+                    .map(javax.swing.JButton.class::cast).findFirst().orElseThrow();
+            close.doClick();
+            holder[0].setSize(holder[0].getPreferredSize());
+            layout(holder[0]);
+            BufferedImage img = new BufferedImage(holder[0].getWidth(), holder[0].getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            Graphics2D g = img.createGraphics();
+            holder[0].printAll(g);
+            g.dispose();
+            try {
+                ImageIO.write(img, "png", Path.of("target", "screenshots", "self-check-light.png").toFile());
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
+        assertTrue(closed[0], "Close closes the self-check");
     }
 
     @ParameterizedTest
@@ -506,6 +543,22 @@ class PanelRunTest {
                 throw new java.io.UncheckedIOException(e);
             }
         });
+    }
+
+    /** The first showing component of a type in a tree (depth first). */
+    static <T> T find(Component c, Class<T> type) {
+        if (type.isInstance(c) && c.isVisible()) {
+            return type.cast(c);
+        }
+        if (c instanceof Container k) {
+            for (Component child : k.getComponents()) {
+                T t = find(child, type);
+                if (t != null) {
+                    return t;
+                }
+            }
+        }
+        return null;
     }
 
     private static void layout(Component c) {
