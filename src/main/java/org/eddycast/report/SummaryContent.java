@@ -159,19 +159,21 @@ public record SummaryContent(String title, String scenarioName, String route, St
         }
         List<String> mixing = new ArrayList<>();
         boolean anyMixing = false;
+        // one mixing figure for every option (a blend time, a distance to mixed) names the row itself
+        String common = OptionVerdict.commonMixingName(options);
         for (StudyResult o : options) {
             Forecast f = o.forecast();
             if (f == null || f.mixing().isEmpty()) {
                 mixing.add("\u2014");
             } else {
                 Forecast.MixingFigure m = f.mixing().get(0);
-                mixing.add(m.name() + ": " + number(m.value()) + " [" + number(m.low()) + ", " + number(m.high())
-                        + "] " + m.unit());
+                mixing.add((common == null ? m.name() + ": " : "") + number(m.value()) + " [" + number(m.low())
+                        + ", " + number(m.high()) + "] " + m.unit());
                 anyMixing = true;
             }
         }
         if (anyMixing) {
-            rows.add(sideRow("first mixing figure", mixing));
+            rows.add(sideRow(common != null ? common : "time or distance to mixed", mixing));
         }
         List<String> assumptions = new ArrayList<>();
         for (StudyResult o : options) {

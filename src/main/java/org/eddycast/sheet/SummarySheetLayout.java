@@ -113,8 +113,9 @@ public final class SummarySheetLayout {
             top.add(heading("Key inputs"));
             top.add(table(pairs(front.keyInputs()), PAIR_COLUMNS, width, BODY));
         } else if (!content.sideBySide().isEmpty()) {
-            top.add(heading("Options side by side (* : 95% interval does not overlap the first option's)"));
-            top.add(table(content.sideBySide(), null, width, SMALL));
+            top.add(heading("Where the options differ (* : 95% interval does not overlap the first option's)"));
+            top.add(table(differing(content.sideBySide()), null, width, SMALL));
+            top.add(text("What the options share, and every input side by side: page 2.", SMALL, width, 2));
         }
         List<Block> bottom = new ArrayList<>();
         bottom.add(heading("Cautions"));
@@ -126,7 +127,7 @@ public final class SummarySheetLayout {
         List<Block> assumptions = new ArrayList<>();
         List<String> all = content.assumptions();
         int shown = 0;
-        double chartMin = front.chart() == null ? 0 : 170;
+        double chartMin = front.chart() == null ? 0 : 130;
         for (String a : all.subList(0, Math.min(KEY_ASSUMPTIONS, all.size()))) {
             Block b = text("\u2022 " + a, SMALL, width, 1);
             if (used + 24 + sum(assumptions) + b.height() + 14 + chartMin > usable) {
@@ -183,6 +184,13 @@ public final class SummarySheetLayout {
         };
     }
 
+    /** The rows of a side-by-side table whose cells are not the same for every option. */
+    private static SummaryContent.Table differing(SummaryContent.Table sideBySide) {
+        List<List<String>> rows = sideBySide.rows().stream()
+                .filter(r -> r.subList(1, r.size()).stream().distinct().count() > 1).toList();
+        return new SummaryContent.Table(sideBySide.header(), rows);
+    }
+
     /** Rows of (input, value) set two to a line: (input, value, input, value). */
     private static SummaryContent.Table pairs(List<List<String>> rows) {
         List<List<String>> out = new ArrayList<>();
@@ -201,6 +209,8 @@ public final class SummarySheetLayout {
         if (!content.sideBySide().isEmpty()) {
             blocks.add(heading("Verdict in full"));
             blocks.add(text(content.verdict(), BODY, width, 4));
+            blocks.add(heading("Options side by side (* : 95% interval does not overlap the first option's)"));
+            blocks.add(table(content.sideBySide(), null, width, BODY));
         }
         if (!content.inputs().isEmpty()) {
             blocks.add(heading("Inputs"));
