@@ -135,6 +135,11 @@ public final class StandaloneHost implements HostContext {
                     .orElseThrow(() -> new IllegalStateException("no tool with id " + toolId + " on the class path"));
             StandaloneHost host = new StandaloneHost(tool);
             host.frame.pack();
+            // never larger than the screen's usable area: on a 1024 x 700 screen the window fits and scrolls
+            java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment()
+                    .getMaximumWindowBounds();
+            host.frame.setSize(Math.min(host.frame.getWidth(), screen.width),
+                    Math.min(host.frame.getHeight(), screen.height));
             host.frame.setLocationRelativeTo(null);
             host.frame.setVisible(true);
         });

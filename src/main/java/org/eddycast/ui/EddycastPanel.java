@@ -96,7 +96,9 @@ public final class EddycastPanel implements ToolPanel {
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, results);
         // the form keeps its own width; a wider window gives the room to the results
         split.setResizeWeight(0.2);
-        left.setMinimumSize(new java.awt.Dimension(360, 200));
+        // never narrower than the run bar's buttons and the form's labels, fields and units need
+        left.setMinimumSize(new java.awt.Dimension(Math.max(Math.max(440, runBar.getPreferredSize().width),
+                form.getMinimumSize().width + scroll.getVerticalScrollBar().getPreferredSize().width), 200));
         results.setMinimumSize(new java.awt.Dimension(560, 200));
         split.setContinuousLayout(true);
         root.add(split, BorderLayout.CENTER);

@@ -83,7 +83,7 @@ public final class ScenarioForm extends JPanel {
             add(title, "span, left, gaptop para, gapbottom 2");
             if (section.key().equals("section.flow")) {
                 add(routeLabel);
-                add(route, "wrap");
+                add(route, "span 2, wmin 60, wrap");
             }
             for (FieldSpec spec : section.fields()) {
                 FieldRow row = new FieldRow(spec);
@@ -557,8 +557,11 @@ public final class ScenarioForm extends JPanel {
 
         void addTo(JPanel p) {
             p.add(label);
-            p.add(editor);
-            if (spec.kind() == FieldSpec.Kind.TEXT && spec.path().equals("flow.record")) {
+            if (spec.kind() == FieldSpec.Kind.CHOICE) {
+                // a chooser has no unit: it takes the unit's column too, so its longest choice shows in full
+                p.add(editor, "span 2, wmin 60");
+            } else if (spec.kind() == FieldSpec.Kind.TEXT && spec.path().equals("flow.record")) {
+                p.add(editor, "wmin 60");
                 javax.swing.JButton browse = new javax.swing.JButton("Browse\u2026");
                 browse.setName("browse:" + spec.path());
                 browse.setMnemonic('B');
@@ -567,6 +570,7 @@ public final class ScenarioForm extends JPanel {
                 p.add(browse);
                 browseButton = browse;
             } else {
+                p.add(editor, "wmin 60");
                 p.add(unit, "wmin 40");
             }
             p.add(problem, "skip, span 2, growx, wmin 10, gapbottom 3");

@@ -61,6 +61,15 @@ final class SelfCheckPanel extends JPanel {
     void start() {
         if (worker == null) {
             worker = new Worker();
+            // the bar moves while a case runs, not only when it finishes
+            worker.addPropertyChangeListener(e -> {
+                if ("progress".equals(e.getPropertyName()) && !cancel.isCancelled() && !worker.isDone()) {
+                    int percent = (Integer) e.getNewValue();
+                    bar.setValue(percent * 10);
+                    bar.setString(String.format(Locale.ROOT, "%d%%: case %d of %d", percent,
+                            Math.min(cases.size(), shown.size() + 1), cases.size()));
+                }
+            });
             worker.execute();
         }
     }
