@@ -37,6 +37,7 @@ final class OptionsView extends JPanel {
             + " as option, Ctrl+K)<br>to compare them side by side.</center></html>", JLabel.CENTER);
     private final JPanel page = new JPanel(new MigLayout("insets dialog, wrap 1, fillx, hidemode 3",
             "[grow,fill]"));
+    private final javax.swing.JScrollPane scroll = ScrollPage.around(page);
     private OptionComparison comparison;
 
     OptionsView() {
@@ -57,7 +58,7 @@ final class OptionsView extends JPanel {
         page.add(details, "wmin 10");
         page.add(chartHolder, "wmin 10, h 300!");
         add(top, BorderLayout.NORTH);
-        add(ScrollPage.around(page), BorderLayout.CENTER);
+        add(scroll, BorderLayout.CENTER);
         refresh();
     }
 
@@ -150,6 +151,7 @@ final class OptionsView extends JPanel {
         }
         legend.setVisible(compared);
         details.setVisible(compared);
+        ScrollPage.toTop(scroll);
         revalidate();
         repaint();
     }

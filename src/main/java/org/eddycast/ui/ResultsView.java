@@ -70,6 +70,8 @@ final class ResultsView extends JPanel {
     private final HeadlinePanel headline = new HeadlinePanel();
     private final OptionsView options = new OptionsView();
     private boolean movedToQuality;
+    /** The tabs whose page scrolls: each shows its top again for a new result. */
+    private final List<JScrollPane> pages = new ArrayList<>();
     private boolean hasResult;
 
     ResultsView() {
@@ -136,8 +138,10 @@ final class ResultsView extends JPanel {
     }
 
     /** A page that scrolls down when the window is short, and follows the window's width. */
-    private static JScrollPane scrolled(JPanel page) {
-        return ScrollPage.around(page);
+    private JScrollPane scrolled(JPanel page) {
+        JScrollPane pane = ScrollPage.around(page);
+        pages.add(pane);
+        return pane;
     }
 
     private void styleStale() {
@@ -292,6 +296,7 @@ final class ResultsView extends JPanel {
         banner.setText(String.format(Locale.ROOT, "Result of \"%s\" (%s)%s", s.scenario().name(), how,
                 warnings.isEmpty() ? "" : ": " + warnings.size() + " warning" + (warnings.size() == 1 ? "" : "s")
                         + ", see Run quality"));
+        pages.forEach(ScrollPage::toTop);
         revalidate();
         repaint();
     }

@@ -28,6 +28,11 @@ final class ScrollPage extends JPanel implements Scrollable {
         return s;
     }
 
+    /** Shows the top of the page again once the new content is laid out (after new content replaced old). */
+    static void toTop(JScrollPane pane) {
+        javax.swing.SwingUtilities.invokeLater(() -> pane.getViewport().setViewPosition(new java.awt.Point(0, 0)));
+    }
+
     @Override
     public Dimension getPreferredScrollableViewportSize() {
         return getPreferredSize();
