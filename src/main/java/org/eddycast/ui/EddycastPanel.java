@@ -315,7 +315,9 @@ public final class EddycastPanel implements ToolPanel {
 
     /** A file name for an output of the current scenario, in the start folder: "lowland-dye-summary.pdf". */
     Path suggestedFile(String suffix) {
-        String name = lastResult != null ? lastResult.scenario().name() : documentName.replaceAll("\\.json$", "");
+        String typed = form.value("name").trim();
+        String name = lastResult != null ? lastResult.scenario().name()
+                : !typed.isEmpty() ? typed : documentName.replaceAll("\\.json$", "");
         String slug = name.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
         return startFolder().resolve((slug.isEmpty() ? "eddycast" : slug) + suffix);
     }

@@ -313,6 +313,50 @@ class PanelRunTest {
     }
 
     @Test
+    void dialogsStartInPresetsThenTheLastFolderAndBrowseFillsTheRecordPath() throws Exception {
+        Preferences node = Preferences.userRoot().node("org/eddycast/ui-test8");
+        TestHost host = new TestHost();
+        EddycastPanel[] holder = new EddycastPanel[1];
+        onEdt(() -> holder[0] = new EddycastPanel(host, new TestDialogs(), new UiPreferences(node)));
+        EddycastPanel panel = holder[0];
+        // the tests run in the project folder, which holds the bundled presets
+        assertEquals(Path.of("presets").toAbsolutePath(), callEdt(panel::startFolder));
+        Path scenario = tmp.resolve("tiny.json");
+        Files.writeString(scenario, TINY);
+        assertTrue(callEdt(() -> panel.open(scenario)));
+        assertEquals(tmp.toAbsolutePath(), callEdt(panel::startFolder), "then the folder used last");
+        assertEquals(tmp.toAbsolutePath().resolve("tiny-test-flow-summary.pdf"),
+                callEdt(() -> panel.suggestedFile("-summary.pdf")), "a name made from the scenario's name");
+        // Browse on the record field: a file under the scenario's folder is written relative to it
+        Path record = Files.createDirectories(tmp.resolve("records")).resolve("probe.csv");
+        Files.writeString(record, "t,u\n0,0\n");
+        host.toOpen = record;
+        onEdt(() -> {
+            panel.form().setRoute("measured");
+            javax.swing.JButton browse = findNamed(panel.form(), "browse:flow.record", javax.swing.JButton.class);
+            browse.doClick();
+        });
+        assertEquals("records/probe.csv", callEdt(() -> panel.form().value("flow.record")));
+        assertEquals(tmp.toAbsolutePath(), host.startedIn, "Browse starts in the scenario's folder");
+        node.removeNode();
+    }
+
+    static <T> T findNamed(Component c, String name, Class<T> type) {
+        if (type.isInstance(c) && name.equals(c.getName())) {
+            return type.cast(c);
+        }
+        if (c instanceof Container k) {
+            for (Component child : k.getComponents()) {
+                T t = findNamed(child, name, type);
+                if (t != null) {
+                    return t;
+                }
+            }
+        }
+        return null;
+    }
+
+    @Test
     void aFileWithABadValueOpensWithThatFieldMarked() throws Exception {
         Path file = tmp.resolve("bad-length.json");
         Files.writeString(file, TINY.replace("\"integralLength\": 0.25", "\"integralLength\": -2"));
@@ -637,9 +681,19 @@ class PanelRunTest {
         public void documentChanged(String documentName, boolean modified) {
         }
 
+        /** What the open dialog answers, and the folder it was asked to start in. */
+        Path toOpen;
+        Path startedIn;
+
         @Override
         public Optional<Path> chooseFileToOpen(String title, String extension) {
-            return Optional.empty();
+            return Optional.ofNullable(toOpen);
+        }
+
+        @Override
+        public Optional<Path> chooseFileToOpen(String title, String extension, Path startFolder) {
+            startedIn = startFolder;
+            return Optional.ofNullable(toOpen);
         }
 
         @Override
