@@ -179,6 +179,15 @@ final class ResultsView extends JPanel {
         return diffusivityTable.rows();
     }
 
+    /** Every column heading of the result's tables (for tests: each has a tooltip). */
+    List<String> columnHeadings() {
+        List<String> all = new ArrayList<>();
+        for (TextTable t : List.of(forecastTable, diffusivityTable, handbookTable, inputsTable)) {
+            all.addAll(t.header());
+        }
+        return all;
+    }
+
     /** The status line's text (for tests). */
     String bannerText() {
         return banner.getText();

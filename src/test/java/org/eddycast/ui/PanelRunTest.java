@@ -166,6 +166,14 @@ class PanelRunTest {
         for (int tab = 0; tab < ResultsView.OPTIONS_TAB; tab++) {
             noLabelCutOff(panel, theme, tab);
         }
+        // every column heading and every chart axis explains its term in a tooltip
+        for (String h : callEdt(() -> panel.results().columnHeadings())) {
+            assertNotNull(Glossary.definition(h), "no tooltip for the column " + h);
+        }
+        for (org.eddycast.report.ChartSpec c : callEdt(() -> panel.results().charts())) {
+            assertNotNull(Glossary.definition(c.xLabel()), "no tooltip for the axis " + c.xLabel());
+            assertNotNull(Glossary.definition(c.yLabel()), "no tooltip for the axis " + c.yLabel());
+        }
         if (theme.equals("light")) {
             // a switch of theme (View menu) redraws the charts in the new theme's colours
             onEdt(() -> {
