@@ -164,8 +164,8 @@ final class OptionsView extends JPanel {
         boolean mixingRow = results.stream().anyMatch(r -> r.forecast() != null && !r.forecast().mixing().isEmpty());
         if (mixingRow) {
             String label = results.stream().filter(r -> r.forecast() != null && !r.forecast().mixing().isEmpty())
-                    .findFirst().map(r -> r.forecast().mixing().get(0)).map(m -> shortName(m.name()) + " ("
-                            + SummaryContent.unit(m.unit()) + ")").orElse("");
+                    .findFirst().map(r -> r.forecast().mixing().get(0)).map(m -> shortName(m.name()) + " ["
+                            + SummaryContent.unit(m.unit()) + "]").orElse("");
             List<String> row = new ArrayList<>(List.of(label));
             for (StudyResult r : results) {
                 Forecast f = r.forecast();
@@ -180,8 +180,9 @@ final class OptionsView extends JPanel {
             rows.add(row);
         }
         for (int a = 0; a < comparison.axes().size(); a++) {
+            // the unit in brackets goes on a second line, so the table fits beside the form at 1024 pixels
             List<String> row = new ArrayList<>(List.of("eddy diffusivity along " + comparison.axes().get(a)
-                    + " (m\u00b2/s)"));
+                    + " [m\u00b2/s]"));
             for (int o = 0; o < names.size(); o++) {
                 var e = comparison.values().get(o).get(a);
                 row.add(SummaryContent.number(e.value()) + " [" + SummaryContent.number(e.low()) + ", "
@@ -196,7 +197,7 @@ final class OptionsView extends JPanel {
                 && c.differs().get(col - 1).get(r - offset));
         swatch.setBackground(ThemeCharts.highlight());
         legendText.setText("Bold on amber: this option's 95% interval does not overlap the first option's (\u201c"
-                + names.get(0) + "\u201d). Brackets hold 95% intervals.");
+                + names.get(0) + "\u201d). Under each value, its 95% interval.");
     }
 
     private static String shortName(String name) {
