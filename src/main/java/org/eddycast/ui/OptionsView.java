@@ -195,7 +195,7 @@ final class OptionsView extends JPanel {
         OptionComparison c = comparison;
         table.highlight((r, col) -> col > 0 && r >= offset && r - offset < c.axes().size()
                 && c.differs().get(col - 1).get(r - offset));
-        swatch.setBackground(ThemeCharts.highlight());
+        swatch.setBackground(ThemeColours.highlight());
         legendText.setText("Bold on amber: this option's 95% interval does not overlap the first option's (\u201c"
                 + names.get(0) + "\u201d). Under each value, its 95% interval.");
     }

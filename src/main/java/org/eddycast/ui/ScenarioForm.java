@@ -92,7 +92,7 @@ public final class ScenarioForm extends JPanel {
             }
         }
         otherProblems.putClientProperty("FlatLaf.styleClass", "small");
-        otherProblems.setForeground(javax.swing.UIManager.getColor("Component.error.focusedBorderColor"));
+        otherProblems.setForeground(ThemeColours.problemText());
         add(otherProblems, "span, growx, wmin 10, gaptop para");
         routeChanged();
     }
@@ -224,6 +224,7 @@ public final class ScenarioForm extends JPanel {
             row.showProblem(row.visible() ? fieldProblems.get(row.spec.path()) : null);
         }
         otherProblems.setText(String.join("\n", other));
+        otherProblems.setForeground(ThemeColours.problemText());
         otherProblems.setVisible(!other.isEmpty());
         last = new Check(scenario, fieldProblems, other);
         revalidate();
@@ -551,7 +552,7 @@ public final class ScenarioForm extends JPanel {
             unit = new JLabel(spec.unit());
             problem.setName("problem:" + editor.getName());
             problem.putClientProperty("FlatLaf.styleClass", "small");
-            problem.setForeground(javax.swing.UIManager.getColor("Component.error.focusedBorderColor"));
+            problem.setForeground(ThemeColours.problemText());
             problem.setVisible(false);
         }
 
@@ -595,6 +596,8 @@ public final class ScenarioForm extends JPanel {
 
         void showProblem(String text) {
             problem.setText(text == null ? "" : text);
+            // the colour of the theme in force now (the theme may have been switched since)
+            problem.setForeground(ThemeColours.problemText());
             problem.setToolTipText(text);
             problem.setVisible(text != null && shown);
             editor.putClientProperty("JComponent.outline", text == null ? null : "error");

@@ -69,7 +69,7 @@ final class TextTable {
                 boolean mark = highlighted.test(r, t.convertColumnIndexToModel(c));
                 setFont(t.getFont().deriveFont(mark ? java.awt.Font.BOLD : java.awt.Font.PLAIN));
                 if (!sel) {
-                    comp.setBackground(mark ? ThemeCharts.highlight() : t.getBackground());
+                    comp.setBackground(mark ? ThemeColours.highlight() : t.getBackground());
                     comp.setForeground(t.getForeground());
                 }
                 return comp;
@@ -177,7 +177,7 @@ final class TextTable {
         }
     }
 
-    /** Marks the cells (row, content column) the test holds for; see {@link ThemeCharts#highlight()}. */
+    /** Marks the cells (row, content column) the test holds for; see {@link ThemeColours#highlight()}. */
     void highlight(java.util.function.BiPredicate<Integer, Integer> cells) {
         highlighted = cells;
         table.repaint();

@@ -37,14 +37,6 @@ final class ThemeCharts {
         return new ChartRendering.Palette(bg, fg, grid, series);
     }
 
-    /**
-     * The background that marks a table cell worth a second look: a soft amber under dark text in the light
-     * theme, a deep amber under light text in the dark theme, so the text stays readable in both.
-     */
-    static Color highlight() {
-        return dark() ? new Color(0x6b, 0x4a, 0x10) : new Color(0xff, 0xe0, 0xb0);
-    }
-
     private static Color colour(String key, Color fallback) {
         Color c = UIManager.getColor(key);
         return c == null ? fallback : c;
