@@ -349,21 +349,6 @@ class PanelRunTest {
         node.removeNode();
     }
 
-    static <T> T findNamed(Component c, String name, Class<T> type) {
-        if (type.isInstance(c) && name.equals(c.getName())) {
-            return type.cast(c);
-        }
-        if (c instanceof Container k) {
-            for (Component child : k.getComponents()) {
-                T t = findNamed(child, name, type);
-                if (t != null) {
-                    return t;
-                }
-            }
-        }
-        return null;
-    }
-
     @Test
     void aFileWithABadValueOpensWithThatFieldMarked() throws Exception {
         Path file = tmp.resolve("bad-length.json");
@@ -479,10 +464,7 @@ class PanelRunTest {
         boolean[] closed = new boolean[1];
         onEdt(() -> {
             holder[0].setCloser(() -> closed[0] = true);
-            javax.swing.JButton close = find(holder[0], javax.swing.JButton.class) == null ? null
-                    : java.util.Arrays.stream(holder[0].getComponents()).filter(c -> "close".equals(c.getName()))
-                    .map(javax.swing.JButton.class::cast).findFirst().orElseThrow();
-            close.doClick();
+            findNamed(holder[0], "close", javax.swing.JButton.class).doClick();
             holder[0].setSize(holder[0].getPreferredSize());
             layout(holder[0]);
             BufferedImage img = new BufferedImage(holder[0].getWidth(), holder[0].getHeight(),
@@ -599,12 +581,21 @@ class PanelRunTest {
 
     /** The first showing component of a type in a tree (depth first). */
     static <T> T find(Component c, Class<T> type) {
-        if (type.isInstance(c) && c.isVisible()) {
+        return first(c, type, x -> x.isVisible());
+    }
+
+    /** The first component of a type with a name in a tree (depth first). */
+    static <T> T findNamed(Component c, String name, Class<T> type) {
+        return first(c, type, x -> name.equals(x.getName()));
+    }
+
+    private static <T> T first(Component c, Class<T> type, java.util.function.Predicate<Component> test) {
+        if (type.isInstance(c) && test.test(c)) {
             return type.cast(c);
         }
         if (c instanceof Container k) {
             for (Component child : k.getComponents()) {
-                T t = find(child, type);
+                T t = first(child, type, test);
                 if (t != null) {
                     return t;
                 }
