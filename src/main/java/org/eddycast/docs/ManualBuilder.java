@@ -26,7 +26,10 @@ import org.commonmark.renderer.html.HtmlRenderer;
  * generated from the test suite's records. Run by the build in the {@code verify} phase, after the tests have
  * written the screenshots and the records.
  *
- * <p>Arguments: manual directory, screenshot directory, validation-record directory, output HTML file.
+ * <p>Arguments: manual directory, screenshot directory, validation-record directory, output HTML file, and
+ * optionally {@value #WITHOUT_TEST_OUTPUTS}: the copy bundled into the jar at package time is built that way,
+ * so that it exists even when the tests were skipped; a screenshot or validation record not written yet is then
+ * replaced by a line saying how to get it, instead of failing the build.
  */
 public final class ManualBuilder {
 
@@ -37,25 +40,42 @@ public final class ManualBuilder {
     private final Path manualDir;
     private final Path screenshotDir;
     private final Path validationDir;
+    private final boolean withoutTestOutputs;
     private final Parser parser = Parser.builder().extensions(EXTENSIONS).build();
     private final HtmlRenderer renderer = HtmlRenderer.builder().extensions(EXTENSIONS).build();
 
+    /** The option that builds the manual even when the tests have not written their outputs yet. */
+    public static final String WITHOUT_TEST_OUTPUTS = "--without-test-outputs";
+
     public ManualBuilder(Path manualDir, Path screenshotDir, Path validationDir) {
+        this(manualDir, screenshotDir, validationDir, false);
+    }
+
+    /**
+     * @param withoutTestOutputs true to stand a line in for a screenshot or validation record the tests have
+     *                           not written yet
+     */
+    public ManualBuilder(Path manualDir, Path screenshotDir, Path validationDir, boolean withoutTestOutputs) {
         this.manualDir = manualDir;
         this.screenshotDir = screenshotDir;
         this.validationDir = validationDir;
+        this.withoutTestOutputs = withoutTestOutputs;
     }
 
     public static void main(String[] args) throws IOException {
-        if (args.length != 4) {
+        boolean lenient = args.length == 5 && WITHOUT_TEST_OUTPUTS.equals(args[4]);
+        if (args.length != 4 && !lenient) {
             throw new IllegalArgumentException("usage: ManualBuilder MANUAL_DIR SCREENSHOT_DIR VALIDATION_DIR OUT.html"
-                    + " (got " + args.length + " arguments)");
+                    + " [" + WITHOUT_TEST_OUTPUTS + "] (got " + args.length + " arguments)");
         }
         Path out = Path.of(args[3]);
-        String html = new ManualBuilder(Path.of(args[0]), Path.of(args[1]), Path.of(args[2])).html();
+        String html = new ManualBuilder(Path.of(args[0]), Path.of(args[1]), Path.of(args[2]), lenient).html();
         Files.createDirectories(out.toAbsolutePath().getParent());
         Files.writeString(out, html, StandardCharsets.UTF_8);
-        System.out.println("manual written to " + out + " (" + html.length() / 1024 + " KiB)");
+        if (!lenient) {
+            // the copy for the jar is written quietly, as part of an ordinary package build
+            System.out.println("manual written to " + out + " (" + html.length() / 1024 + " KiB)");
+        }
     }
 
     /** The whole manual as one HTML document. */
@@ -65,9 +85,7 @@ public final class ManualBuilder {
         StringBuilder body = new StringBuilder();
         List<String> problems = new ArrayList<>();
         for (ManualContents.Chapter c : contents.chapters()) {
-            String markdown = c.generated()
-                    ? ValidationChapter.markdown(c.title(), ValidationChapter.read(validationDir))
-                    : read(manualDir.resolve(c.file()));
+            String markdown = c.generated() ? validationChapter(c.title()) : read(manualDir.resolve(c.file()));
             Node doc = parser.parse(markdown);
             doc.accept(new Rewriter(c.file(), contents, problems));
             body.append("<section class=\"chapter\" id=\"").append(c.anchor()).append("\">\n")
@@ -85,6 +103,19 @@ public final class ManualBuilder {
         return "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>"
                 + escape(contents.title()) + "</title>\n<style>\n" + STYLE + "</style>\n</head>\n<body>\n<header><h1>"
                 + escape(contents.title()) + "</h1></header>\n" + toc + body + "</body>\n</html>\n";
+    }
+
+    private String validationChapter(String title) {
+        try {
+            return ValidationChapter.markdown(title, ValidationChapter.read(validationDir));
+        } catch (ManualBuildException e) {
+            if (!withoutTestOutputs) {
+                throw e;
+            }
+            return "# " + title + "\n\nThe test suite writes this chapter: every check against an outside value, "
+                    + "with its source, the expected and computed values and the verdict. This copy of the manual "
+                    + "was built without running the tests; `mvn -B verify` builds it with the record.\n";
+        }
     }
 
     private static String read(Path file) {
@@ -113,7 +144,12 @@ public final class ManualBuilder {
             String dest = image.getDestination();
             if (!dest.startsWith("data:")) {
                 Path file = locate(dest);
-                if (file == null) {
+                if (file == null && withoutTestOutputs) {
+                    image.insertAfter(new org.commonmark.node.Text("[picture: " + altText(image) + "; the test "
+                            + "suite draws it, and 'mvn -B verify' puts it here]"));
+                    image.unlink();
+                    return;
+                } else if (file == null) {
                     problems.add(page + " references the image " + dest + ", which is neither at "
                             + manualDir.resolve(dest).normalize() + " nor in " + screenshotDir
                             + " (screenshots are written by the tests: run 'mvn -B verify')");
@@ -134,6 +170,16 @@ public final class ManualBuilder {
             }
             visitChildren(link);
         }
+    }
+
+    private static String altText(Image image) {
+        StringBuilder sb = new StringBuilder();
+        for (Node n = image.getFirstChild(); n != null; n = n.getNext()) {
+            if (n instanceof org.commonmark.node.Text t) {
+                sb.append(t.getLiteral());
+            }
+        }
+        return sb.toString();
     }
 
     /** The image file: relative to the manual directory, else by its file name among the screenshots. */

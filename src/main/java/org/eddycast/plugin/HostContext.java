@@ -29,6 +29,22 @@ public interface HostContext {
     Optional<Path> chooseFileToOpen(String title, String extension);
 
     /**
+     * Asks the user for a file to open, the dialog starting in a given folder.
+     *
+     * @param startFolder the folder the dialog opens in, or null for the host's choice
+     */
+    default Optional<Path> chooseFileToOpen(String title, String extension, Path startFolder) {
+        return chooseFileToOpen(title, extension);
+    }
+
+    /**
+     * The value an action carries under this key, a {@code java.util.function.Supplier<List<Action>>}, makes
+     * the host show the action as a submenu whose entries are asked for each time it opens (an "open recent"
+     * list, for example). An empty list shows the submenu disabled.
+     */
+    String SUBMENU_ITEMS = "org.eddycast.plugin.submenuItems";
+
+    /**
      * Asks the user for a file to save to.
      *
      * @param title     the dialog's title

@@ -135,6 +135,11 @@ public final class StandaloneHost implements HostContext {
                     .orElseThrow(() -> new IllegalStateException("no tool with id " + toolId + " on the class path"));
             StandaloneHost host = new StandaloneHost(tool);
             host.frame.pack();
+            // never larger than the screen's usable area: on a 1024 x 700 screen the window fits and scrolls
+            java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment()
+                    .getMaximumWindowBounds();
+            host.frame.setSize(Math.min(host.frame.getWidth(), screen.width),
+                    Math.min(host.frame.getHeight(), screen.height));
             host.frame.setLocationRelativeTo(null);
             host.frame.setVisible(true);
         });
@@ -181,11 +186,18 @@ public final class StandaloneHost implements HostContext {
         com.formdev.flatlaf.FlatLaf.updateUI();
     }
 
+    /**
+     * Closes the tool when it agrees: every window of the process (the self-check and any other dialog
+     * included) is closed and the process ends, since this host owns it.
+     */
     private void closeIfAllowed() {
         if (panel != null && panel.confirmClose()) {
             panel.dispose();
             panel = null;
-            frame.dispose();
+            for (java.awt.Window w : java.awt.Window.getWindows()) {
+                w.dispose();
+            }
+            System.exit(0);
         }
     }
 
@@ -201,7 +213,15 @@ public final class StandaloneHost implements HostContext {
 
     @Override
     public Optional<Path> chooseFileToOpen(String title, String extension) {
+        return chooseFileToOpen(title, extension, null);
+    }
+
+    @Override
+    public Optional<Path> chooseFileToOpen(String title, String extension, Path startFolder) {
         JFileChooser chooser = chooser(title, extension, null);
+        if (startFolder != null) {
+            chooser.setCurrentDirectory(startFolder.toFile());
+        }
         if (chooser.showOpenDialog(frame) != JFileChooser.APPROVE_OPTION) {
             return Optional.empty();
         }
@@ -249,10 +269,44 @@ public final class StandaloneHost implements HostContext {
         for (Action a : actions) {
             if (a == null) {
                 menu.addSeparator();
+            } else if (a.getValue(SUBMENU_ITEMS) instanceof java.util.function.Supplier<?> items) {
+                menu.add(submenu(a, items));
             } else {
                 menu.add(a);
             }
         }
+    }
+
+    /** A submenu filled from the supplier each time it opens. */
+    private static JMenu submenu(Action a, java.util.function.Supplier<?> items) {
+        JMenu sub = new JMenu(a);
+        sub.addMenuListener(new javax.swing.event.MenuListener() {
+            @Override
+            public void menuSelected(javax.swing.event.MenuEvent e) {
+                sub.removeAll();
+                if (items.get() instanceof List<?> list) {
+                    for (Object o : list) {
+                        if (o instanceof Action item) {
+                            sub.add(item);
+                        }
+                    }
+                }
+                if (sub.getItemCount() == 0) {
+                    JMenuItem none = new JMenuItem("(none yet)");
+                    none.setEnabled(false);
+                    sub.add(none);
+                }
+            }
+
+            @Override
+            public void menuDeselected(javax.swing.event.MenuEvent e) {
+            }
+
+            @Override
+            public void menuCanceled(javax.swing.event.MenuEvent e) {
+            }
+        });
+        return sub;
     }
 
     @Override

@@ -58,15 +58,17 @@ public final class ChartSpecs {
                 mid[j] = 0.5 * (t[j] + t[j + 1]);
                 d[j] = 0.5 * (m[j + 1] - m[j]) / (t[j + 1] - t[j]);
             }
-            curves.add(ChartSpec.Curve.line("running value along " + AXES[a], mid, d, false));
+            // each axis keeps one colour: its running value and its estimate agree
+            curves.add(new ChartSpec.Curve("running value along " + AXES[a], mid, d, null, null, false, a));
         }
         if (estimates != null && t.length > 1) {
-            for (AxisEstimate e : estimates) {
+            for (int a = 0; a < estimates.size(); a++) {
+                AxisEstimate e = estimates.get(a);
                 double[] x = {e.diffusivity().windowStart(), e.diffusivity().windowEnd()};
                 double v = e.diffusivity().value();
                 curves.add(new ChartSpec.Curve("estimate " + e.axisName() + " (95% interval)", x,
                         new double[] {v, v}, new double[] {e.diffusivity().low(), e.diffusivity().low()},
-                        new double[] {e.diffusivity().high(), e.diffusivity().high()}, true));
+                        new double[] {e.diffusivity().high(), e.diffusivity().high()}, true, a));
             }
         }
         return new ChartSpec("Running eddy diffusivity", "time (s)", "eddy diffusivity (m\u00b2/s)", false, false,
@@ -164,7 +166,9 @@ public final class ChartSpecs {
                 }
                 points.add(new double[] {grid[j], factor * Math.sqrt(2 * eps * times[j])});
             }
-            if (points.size() < 2) {
+            // a curve over the last grid point or two is a pair of dashes in a corner: the handbook table
+            // compares that estimate instead
+            if (points.size() < 4) {
                 continue;
             }
             double[] x = points.stream().mapToDouble(p -> p[0]).toArray();

@@ -161,19 +161,21 @@ public record SummaryContent(String title, String scenarioName, String route, St
         }
         List<String> mixing = new ArrayList<>();
         boolean anyMixing = false;
+        // one mixing figure for every option (a blend time, a distance to mixed) names the row itself
+        String common = OptionVerdict.commonMixingName(options);
         for (StudyResult o : options) {
             Forecast f = o.forecast();
             if (f == null || f.mixing().isEmpty()) {
                 mixing.add("\u2014");
             } else {
                 Forecast.MixingFigure m = f.mixing().get(0);
-                mixing.add(m.name() + ": " + number(m.value()) + " [" + number(m.low()) + ", " + number(m.high())
-                        + "] " + m.unit());
+                mixing.add((common == null ? m.name() + ": " : "") + number(m.value()) + " [" + number(m.low())
+                        + ", " + number(m.high()) + "] " + m.unit());
                 anyMixing = true;
             }
         }
         if (anyMixing) {
-            rows.add(sideRow("first mixing figure", mixing));
+            rows.add(sideRow(common != null ? common : "time or distance to mixed", mixing));
         }
         List<String> assumptions = new ArrayList<>();
         for (StudyResult o : options) {
@@ -375,6 +377,7 @@ public record SummaryContent(String title, String scenarioName, String route, St
                 ""));
         rows.add(row("molecular diffusivity D0", sc.substance().molecularDiffusivity(), "m\u00b2/s"));
         rows.add(row("mass released", sc.release().mass(), "kg"));
+        rows.add(new Row("release point", releasePoint(sc), "", ""));
         if (!Double.isNaN(sc.release().rate())) {
             rows.add(row("release rate", sc.release().rate(), "kg/s"));
         }
@@ -382,6 +385,19 @@ public record SummaryContent(String title, String scenarioName, String route, St
         rows.add(row("particles", sc.simulation().particles(), "-"));
         rows.add(new Row("seed", Long.toString(sc.simulation().seed()), "", "-"));
         return rows;
+    }
+
+    /** Where the tracer is released, in words: the bank or the centre-line of a channel, a point in a tank. */
+    static String releasePoint(Scenario sc) {
+        if (sc.flow() instanceof ChannelFlow) {
+            return sc.release().atBank() ? "at the bank" : "on the centre-line";
+        }
+        double[] p = sc.release().position();
+        if (sc.flow() instanceof TankFlow) {
+            return p == null ? "centre of the tank" : String.format(Locale.ROOT, "x %s, y %s, z %s m from a corner",
+                    number(p[0]), number(p[1]), number(p[2]));
+        }
+        return "a point in open water";
     }
 
     private static List<Row> results(StudyResult s) {

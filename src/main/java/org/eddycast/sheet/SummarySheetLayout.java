@@ -14,8 +14,11 @@ import java.util.List;
 
 /**
  * Lays the summary sheet out on A4 pages (points, 1/72 inch) and draws any page into a Graphics2D. The PDF
- * writer and the printer use this one layout, so paper and screen say the same. Text uses the logical fonts
- * SansSerif and Serif, which the PDF writer maps to the standard PDF fonts.
+ * writer and the printer use this one layout, so paper and screen say the same. Page 1 is a complete summary on
+ * its own: the question, the answer, the key inputs with the release point, one chart, the key assumptions and
+ * the cautions. The detail pages follow: every input and result, the forecast table, the handbook comparison,
+ * the other charts, every assumption and the methods; their charts shrink a little rather than leave a last
+ * page nearly empty. Text is set in {@link SheetFonts} (embedded in the PDF).
  */
 public final class SummarySheetLayout {
 
@@ -23,13 +26,17 @@ public final class SummarySheetLayout {
     public static final double PAGE_WIDTH = 595.28;
     public static final double PAGE_HEIGHT = 841.89;
     static final double MARGIN = 48;
+    /** A last page filled less than this is nearly empty. */
+    static final double NEARLY_EMPTY = 0.25;
 
-    private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 16);
-    private static final Font HEADING = new Font(Font.SANS_SERIF, Font.BOLD, 11);
-    private static final Font BODY = new Font(Font.SANS_SERIF, Font.PLAIN, 9);
-    private static final Font SMALL = new Font(Font.SANS_SERIF, Font.PLAIN, 8);
+    private static final Font TITLE = SheetFonts.bold(16);
+    private static final Font ANSWER = SheetFonts.bold(13);
+    private static final Font HEADING = SheetFonts.bold(11);
+    private static final Font BODY = SheetFonts.regular(9);
+    private static final Font SMALL = SheetFonts.regular(8);
     private static final Color INK = new Color(0x22, 0x22, 0x22);
     private static final Color RULE = new Color(0x1f, 0x6f, 0x8b);
+    private static final Color ANSWER_BACKGROUND = new Color(0xe8, 0xf1, 0xf5);
 
     /** Something drawn at a height on a page. */
     private interface Block {
@@ -40,28 +47,170 @@ public final class SummarySheetLayout {
 
     private final List<List<Block>> pages = new ArrayList<>();
     private final String footer;
+    private final List<String> pageOne = new ArrayList<>();
+    private final String title;
+    private final String toolVersion;
 
     /**
      * @param content the sheet's text
-     * @param charts  the charts to include (at most two are drawn)
+     * @param front   what page 1 says
+     * @param charts  the charts for the detail pages (at most {@link #MAX_CHARTS})
      */
-    public SummarySheetLayout(SummaryContent content, List<ChartSpec> charts) {
+    public SummarySheetLayout(SummaryContent content, SheetFront front, List<ChartSpec> charts) {
         String name = content.scenarioName().length() > 60 ? content.scenarioName().substring(0, 57) + "..."
                 : content.scenarioName();
         footer = "eddycast " + content.toolVersion() + " \u2014 " + name + " \u2014 "
                 + content.date() + " \u2014 screening estimate";
+        title = content.title() + ": " + content.scenarioName();
+        toolVersion = content.toolVersion();
         double width = PAGE_WIDTH - 2 * MARGIN;
-        List<Block> blocks = new ArrayList<>();
-        blocks.add(text(content.title(), TITLE, width, 4));
-        blocks.add(text((content.sideBySide().isEmpty() ? "Scenario: " : "Options: ") + content.scenarioName(),
+        pages.add(frontPage(content, front, width));
+        List<ChartSpec> detailCharts = charts.subList(0, Math.min(MAX_CHARTS, charts.size()));
+        // charts shrink in steps until the last page is not nearly empty (or they reach their smallest)
+        List<List<Block>> detail = List.of();
+        for (double chartHeight = 300; chartHeight >= 180; chartHeight -= 20) {
+            detail = paginate(detailBlocks(content, detailCharts, width, chartHeight));
+            if (detail.isEmpty() || fill(detail.get(detail.size() - 1)) >= NEARLY_EMPTY || detail.size() == 1
+                    && detailCharts.isEmpty()) {
+                break;
+            }
+        }
+        pages.addAll(detail);
+    }
+
+    /** How full a page (0-based) is: its content's height over the usable height. */
+    public double pageFill(int page) {
+        return fill(pages.get(page));
+    }
+
+    /** The document's title. */
+    public String title() {
+        return title;
+    }
+
+    /** The version of the tool that made the result. */
+    public String toolVersion() {
+        return toolVersion;
+    }
+
+    /** What page 1 says, as text in reading order (for tests). */
+    public List<String> pageOneText() {
+        return List.copyOf(pageOne);
+    }
+
+    private List<Block> frontPage(SummaryContent content, SheetFront front, double width) {
+        double usable = PAGE_HEIGHT - 2 * MARGIN;
+        List<Block> top = new ArrayList<>();
+        top.add(text(content.title(), TITLE, width, 4));
+        top.add(text((content.sideBySide().isEmpty() ? "Scenario: " : "Options: ") + content.scenarioName(),
                 HEADING, width, 2));
-        blocks.add(text("Flow route: " + content.route() + ".   Computed " + content.date() + " with eddycast "
-                + content.toolVersion() + ".", BODY, width, 6));
+        top.add(text("Flow route: " + content.route() + ".   Computed " + content.date() + " with eddycast "
+                + content.toolVersion() + ". Detail from page 2.", BODY, width, 4));
+        top.add(heading("Question"));
+        top.add(text(front.question(), BODY, width, 4));
+        top.add(answerBox(front, width));
+        if (!front.keyInputs().isEmpty()) {
+            top.add(heading("Key inputs"));
+            top.add(table(pairs(front.keyInputs()), PAIR_COLUMNS, width, BODY));
+        } else if (!content.sideBySide().isEmpty()) {
+            top.add(heading("Where the options differ (* : 95% interval does not overlap the first option's)"));
+            top.add(table(differing(content.sideBySide()), null, width, SMALL));
+            top.add(text("What the options share, and every input side by side: page 2.", SMALL, width, 2));
+        }
+        List<Block> bottom = new ArrayList<>();
+        bottom.add(heading("Cautions"));
+        for (String c : content.cautions()) {
+            bottom.add(text("\u2022 " + c, SMALL, width, 1));
+        }
+        double used = sum(top) + sum(bottom);
+        // the key assumptions: the first ones listed, as many as leave room for a useful chart
+        List<Block> assumptions = new ArrayList<>();
+        List<String> all = content.assumptions();
+        int shown = 0;
+        double chartMin = front.chart() == null ? 0 : 130;
+        for (String a : all.subList(0, Math.min(KEY_ASSUMPTIONS, all.size()))) {
+            Block b = text("\u2022 " + a, SMALL, width, 1);
+            if (used + 24 + sum(assumptions) + b.height() + 14 + chartMin > usable) {
+                break;
+            }
+            assumptions.add(b);
+            shown++;
+        }
+        List<Block> page = new ArrayList<>(top);
+        if (shown > 0) {
+            page.add(heading("Key assumptions"));
+            page.addAll(assumptions);
+            page.add(text(all.size() > shown ? "All " + all.size() + " assumptions and how each value was obtained:"
+                    + " page 2 on." : "How each value was obtained: page 2 on.", SMALL, width, 2));
+        }
+        double room = usable - sum(page) - sum(bottom);
+        if (front.chart() != null && room >= 120) {
+            page.add(chart(front.chart(), width, Math.min(260, room - 8)));
+        }
+        page.addAll(bottom);
+        pageOne.add(front.question());
+        pageOne.add(front.answer());
+        pageOne.addAll(front.figures());
+        pageOne.addAll(content.cautions());
+        return page;
+    }
+
+    /** The answer in large type on a tinted band, its figures below it. */
+    private static Block answerBox(SheetFront front, double width) {
+        List<Block> inner = new ArrayList<>();
+        inner.add(text(front.answer(), ANSWER, width - 16, 3));
+        for (String f : front.figures()) {
+            inner.add(text(f, BODY, width - 16, 1));
+        }
+        double h = sum(inner) + 14;
+        return new Block() {
+            @Override
+            public double height() {
+                return h + 6;
+            }
+
+            @Override
+            public void draw(Graphics2D g, double x, double y, double w) {
+                g.setColor(ANSWER_BACKGROUND);
+                g.fill(new Rectangle2D.Double(x, y + 4, w, h));
+                g.setColor(RULE);
+                g.fill(new Rectangle2D.Double(x, y + 4, 3, h));
+                double at = y + 11;
+                for (Block b : inner) {
+                    b.draw(g, x + 10, at, w - 16);
+                    at += b.height();
+                }
+            }
+        };
+    }
+
+    /** The rows of a side-by-side table whose cells are not the same for every option. */
+    private static SummaryContent.Table differing(SummaryContent.Table sideBySide) {
+        List<List<String>> rows = sideBySide.rows().stream()
+                .filter(r -> r.subList(1, r.size()).stream().distinct().count() > 1).toList();
+        return new SummaryContent.Table(sideBySide.header(), rows);
+    }
+
+    /** Rows of (input, value) set two to a line: (input, value, input, value). */
+    private static SummaryContent.Table pairs(List<List<String>> rows) {
+        List<List<String>> out = new ArrayList<>();
+        int half = (rows.size() + 1) / 2;
+        for (int i = 0; i < half; i++) {
+            List<String> line = new ArrayList<>(rows.get(i));
+            line.addAll(i + half < rows.size() ? rows.get(i + half) : List.of("", ""));
+            out.add(line);
+        }
+        return new SummaryContent.Table(List.of("input", "value", "input", "value"), out);
+    }
+
+    private static List<Block> detailBlocks(SummaryContent content, List<ChartSpec> charts, double width,
+                                            double chartHeight) {
+        List<Block> blocks = new ArrayList<>();
         if (!content.sideBySide().isEmpty()) {
+            blocks.add(heading("Verdict in full"));
+            blocks.add(text(content.verdict(), BODY, width, 4));
             blocks.add(heading("Options side by side (* : 95% interval does not overlap the first option's)"));
             blocks.add(table(content.sideBySide(), null, width, BODY));
-            blocks.add(heading("Verdict"));
-            blocks.add(text(content.verdict(), BODY, width, 4));
         }
         if (!content.inputs().isEmpty()) {
             blocks.add(heading("Inputs"));
@@ -97,23 +246,33 @@ public final class SummarySheetLayout {
             blocks.add(heading("Handbook comparison"));
             blocks.add(text("No handbook estimate applies to this flow route.", BODY, width, 4));
         }
-        for (ChartSpec c : charts.subList(0, Math.min(MAX_CHARTS, charts.size()))) {
-            blocks.add(chart(c, width, 300));
+        for (ChartSpec c : charts) {
+            blocks.add(chart(c, width, chartHeight));
         }
         blocks.add(heading("Assumptions and how values were obtained"));
         for (String a : content.assumptions()) {
             blocks.add(text("\u2022 " + a, BODY, width, 2));
         }
-        blocks.add(heading("Cautions"));
-        for (String c : content.cautions()) {
-            blocks.add(text("\u2022 " + c, BODY, width, 2));
-        }
         blocks.add(heading("Methods"));
         for (String r : content.references()) {
             blocks.add(text(r, SMALL, width, 1));
         }
-        paginate(blocks);
+        return blocks;
     }
+
+    private static double sum(List<Block> blocks) {
+        return blocks.stream().mapToDouble(Block::height).sum();
+    }
+
+    private static double fill(List<Block> page) {
+        return sum(page) / (PAGE_HEIGHT - 2 * MARGIN);
+    }
+
+    /** The key assumptions page 1 shows at most: the general ones every forecast lists first. */
+    static final int KEY_ASSUMPTIONS = 5;
+
+    /** Column starts for (input, value, input, value). */
+    private static final double[] PAIR_COLUMNS = {0, 0.25, 0.52, 0.77};
 
     /** The most charts a sheet draws. */
     public static final int MAX_CHARTS = 3;
@@ -169,7 +328,8 @@ public final class SummarySheetLayout {
                 (float) (PAGE_HEIGHT - MARGIN / 2));
     }
 
-    private void paginate(List<Block> blocks) {
+    private static List<List<Block>> paginate(List<Block> blocks) {
+        List<List<Block>> pages = new ArrayList<>();
         double usable = PAGE_HEIGHT - 2 * MARGIN;
         List<Block> page = new ArrayList<>();
         double used = 0;
@@ -189,6 +349,7 @@ public final class SummarySheetLayout {
         if (!page.isEmpty()) {
             pages.add(page);
         }
+        return pages;
     }
 
     private static FontMetrics metrics(Font f) {
@@ -266,7 +427,7 @@ public final class SummarySheetLayout {
         int columns = table.header().size();
         double[] at = starts != null ? starts : evenColumns(columns);
         FontMetrics fm = metrics(font);
-        FontMetrics bold = metrics(font.deriveFont(Font.BOLD));
+        FontMetrics bold = metrics(SheetFonts.bold(font.getSize2D()));
         double lineHeight = fm.getHeight();
         List<List<List<String>>> cells = new ArrayList<>();
         List<List<String>> header = new ArrayList<>();
@@ -299,7 +460,7 @@ public final class SummarySheetLayout {
             @Override
             public void draw(Graphics2D g, double x, double y, double w) {
                 g.setColor(INK);
-                g.setFont(font.deriveFont(Font.BOLD));
+                g.setFont(SheetFonts.bold(font.getSize2D()));
                 for (int c = 0; c < columns; c++) {
                     List<String> lines = header.get(c);
                     for (int i = 0; i < lines.size(); i++) {

@@ -5,7 +5,7 @@ import org.eddycast.report.SummaryContent;
 import org.eddycast.report.ChartSpecs;
 import org.eddycast.report.ChartSpec;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
-import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawerDefaultFonts;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawer;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
@@ -20,7 +20,7 @@ import org.eddycast.scenario.AtomicFiles;
 
 /**
  * Writes the summary sheet as PDF: the {@link SummarySheetLayout} drawn through a Graphics2D bridge, so charts
- * are vector graphics and text stays text (standard PDF fonts). Written atomically.
+ * are vector graphics and text stays text, set in the embedded {@link SheetFonts}. Written atomically.
  */
 public final class SummarySheetPdf {
 
@@ -29,7 +29,22 @@ public final class SummarySheetPdf {
 
     /** The sheet of one study, with its spread and settling charts. */
     public static void write(StudyResult result, Path target) throws IOException {
-        write(SummaryContent.of(result), defaultCharts(result), target);
+        write(layout(result), target);
+    }
+
+    /** The layout of one study's sheet (for the PDF and the printer). */
+    public static SummarySheetLayout layout(StudyResult result) {
+        SummaryContent content = SummaryContent.of(result);
+        List<ChartSpec> charts = defaultCharts(result);
+        return new SummarySheetLayout(content, SheetFront.of(result, content, charts), charts.subList(
+                Math.min(1, charts.size()), charts.size()));
+    }
+
+    /** The layout of a comparison sheet. */
+    public static SummarySheetLayout optionsLayout(List<String> names, List<StudyResult> options) {
+        List<ChartSpec> charts = optionCharts(names, options);
+        return new SummarySheetLayout(SummaryContent.ofOptions(names, options),
+                SheetFront.ofOptions(names, options, charts), List.of());
     }
 
     /**
@@ -48,7 +63,7 @@ public final class SummarySheetPdf {
 
     /** The comparison sheet of design options (two or more): side by side, overlaid widths, the verdict. */
     public static void writeOptions(List<String> names, List<StudyResult> options, Path target) throws IOException {
-        write(SummaryContent.ofOptions(names, options), optionCharts(names, options), target);
+        write(optionsLayout(names, options), target);
     }
 
     /** The charts of a comparison sheet: the options' widths overlaid, when every option has a forecast. */
@@ -59,20 +74,22 @@ public final class SummarySheetPdf {
         return List.of(ChartSpecs.optionWidths(names, options.stream().map(StudyResult::forecast).toList()));
     }
 
-    /** Writes the given content and charts. */
-    public static void write(SummaryContent content, List<ChartSpec> charts, Path target) throws IOException {
-        SummarySheetLayout layout = new SummarySheetLayout(content, charts);
+    /** Writes a laid-out sheet, its fonts embedded. */
+    public static void write(SummarySheetLayout layout, Path target) throws IOException {
         AtomicFiles.write(target, out -> {
-            try (PDDocument doc = new PDDocument()) {
+            try (PDDocument doc = new PDDocument();
+                 PdfBoxGraphics2DFontTextDrawer fonts = new PdfBoxGraphics2DFontTextDrawer()) {
                 PDDocumentInformation info = doc.getDocumentInformation();
-                info.setTitle(content.title() + ": " + content.scenarioName());
-                info.setCreator("eddycast " + content.toolVersion());
+                info.setTitle(layout.title());
+                info.setCreator("eddycast " + layout.toolVersion());
+                SheetFonts.register(fonts, doc);
                 for (int p = 0; p < layout.pageCount(); p++) {
                     PDPage page = new PDPage(PDRectangle.A4);
                     doc.addPage(page);
                     PdfBoxGraphics2D g = new PdfBoxGraphics2D(doc, (float) SummarySheetLayout.PAGE_WIDTH,
                             (float) SummarySheetLayout.PAGE_HEIGHT);
-                    g.setFontTextDrawer(new PdfBoxGraphics2DFontTextDrawerDefaultFonts());
+                    // text in the registered fonts is embedded; anything else is drawn as outlines
+                    g.setFontTextDrawer(fonts);
                     layout.drawPage(g, p);
                     g.dispose();
                     try (PDPageContentStream cs = new PDPageContentStream(doc, page)) {

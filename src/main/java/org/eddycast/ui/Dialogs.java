@@ -16,6 +16,19 @@ interface Dialogs {
     /** Tells of a fault in plain words, with the technical details one step away. */
     void fault(String title, String message, String details);
 
+    /** Makes Esc close a dialog of the tool's own, as it closes the standard ones. */
+    static void closeOnEscape(javax.swing.JDialog d) {
+        javax.swing.JRootPane root = d.getRootPane();
+        root.getInputMap(javax.swing.JComponent.WHEN_IN_FOCUSED_WINDOW).put(javax.swing.KeyStroke.getKeyStroke(
+                java.awt.event.KeyEvent.VK_ESCAPE, 0), "close");
+        root.getActionMap().put("close", new javax.swing.AbstractAction() {
+            @Override
+            public void actionPerformed(java.awt.event.ActionEvent e) {
+                d.dispatchEvent(new java.awt.event.WindowEvent(d, java.awt.event.WindowEvent.WINDOW_CLOSING));
+            }
+        });
+    }
+
     /** Dialogs shown with JOptionPane over a parent. */
     static Dialogs over(java.util.function.Supplier<Component> parent) {
         return new Dialogs() {

@@ -49,8 +49,7 @@ public final class EddycastPanel implements ToolPanel {
             KeyEvent.VK_ESCAPE, 0), this::cancel);
     private final Action keepAction = action("Keep result as option", KeyEvent.VK_K, KeyStroke.getKeyStroke(
             KeyEvent.VK_K, InputEvent.CTRL_DOWN_MASK), this::keepOption);
-    private final Action clearOptionsAction = action("Clear options", KeyEvent.VK_L, null,
-            () -> results.options().clear());
+    private final Action clearOptionsAction = action("Clear options", KeyEvent.VK_L, null, this::clearOptions);
     private final Action saveAction = action("Save", KeyEvent.VK_S, KeyStroke.getKeyStroke(KeyEvent.VK_S,
             InputEvent.CTRL_DOWN_MASK), this::save);
     private final Exports exports;
@@ -62,6 +61,8 @@ public final class EddycastPanel implements ToolPanel {
     private boolean modified;
     private int threads = Engine.defaultThreads();
     private StudyWorker.Runner runner = Engine::run;
+    /** True when the form was edited after the result on view was made. */
+    private boolean changedSinceResult;
 
     /** A panel over a host; dialogs appear over the host's window. */
     public EddycastPanel(HostContext host) {
@@ -72,7 +73,7 @@ public final class EddycastPanel implements ToolPanel {
         this.host = host;
         this.dialogs = dialogs != null ? dialogs : Dialogs.over(host::dialogParent);
         this.prefs = prefs;
-        this.exports = new Exports(host, this.dialogs, this::lastResult, results);
+        this.exports = new Exports(host, this.dialogs, this::lastResult, results, this::suggestedFile);
         progress.setStringPainted(true);
         progress.setString("Ready");
         progress.setName("progress");
@@ -82,24 +83,29 @@ public final class EddycastPanel implements ToolPanel {
         JButton stop = new JButton(cancelAction);
         stop.setName("cancel");
         JButton keep = new JButton(keepAction);
-        JPanel runBar = new JPanel(new MigLayout("insets dialog, fillx", "[grow,fill][][][]"));
-        runBar.add(progress);
+        // the progress text on a row of its own, so it is never squeezed by the buttons
+        JPanel runBar = new JPanel(new MigLayout("insets dialog, fillx, wrap 3", "[grow,fill][grow,fill][grow,fill]"));
+        runBar.add(progress, "span 3, wmin 10");
         runBar.add(run, "sizegroup b");
         runBar.add(stop, "sizegroup b");
         runBar.add(keep);
         JPanel left = new JPanel(new BorderLayout());
-        JScrollPane scroll = new JScrollPane(form);
-        scroll.getVerticalScrollBar().setUnitIncrement(16);
-        scroll.setBorder(null);
+        JScrollPane scroll = ScrollPage.around(form);
         left.add(scroll, BorderLayout.CENTER);
         left.add(runBar, BorderLayout.SOUTH);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, results);
-        split.setResizeWeight(0.35);
+        // the form keeps its own width; a wider window gives the room to the results
+        split.setResizeWeight(0.2);
+        // never narrower than the run bar's buttons and the form's labels, fields and units need
+        left.setMinimumSize(new java.awt.Dimension(Math.max(Math.max(440, runBar.getPreferredSize().width),
+                form.getMinimumSize().width + scroll.getVerticalScrollBar().getPreferredSize().width), 200));
+        results.setMinimumSize(new java.awt.Dimension(560, 200));
         split.setContinuousLayout(true);
         root.add(split, BorderLayout.CENTER);
         root.setPreferredSize(new java.awt.Dimension(1280, 820));
         bindKeys(runAction, cancelAction, keepAction, saveAction);
         form.addChangeListener(this::formChanged);
+        form.setRecordChooser(start -> host.chooseFileToOpen("Velocity record", "csv", start));
         cancelAction.setEnabled(false);
         keepAction.setEnabled(false);
         contributeMenus();
@@ -108,7 +114,8 @@ public final class EddycastPanel implements ToolPanel {
     private void contributeMenus() {
         Action open = action("Open scenario\u2026", KeyEvent.VK_O, KeyStroke.getKeyStroke(KeyEvent.VK_O,
                 InputEvent.CTRL_DOWN_MASK), this::openChosen);
-        Action recent = action("Open recent\u2026", KeyEvent.VK_T, null, this::openRecent);
+        Action recent = action("Open recent", KeyEvent.VK_T, null, () -> { });
+        recent.putValue(HostContext.SUBMENU_ITEMS, (java.util.function.Supplier<List<Action>>) this::recentActions);
         Action saveAs = action("Save as\u2026", KeyEvent.VK_A, KeyStroke.getKeyStroke(KeyEvent.VK_S,
                 InputEvent.CTRL_DOWN_MASK | InputEvent.SHIFT_DOWN_MASK), this::saveAs);
         host.contributeMenu("&File", java.util.Arrays.asList(open, recent, saveAction, saveAs, null,
@@ -122,7 +129,7 @@ public final class EddycastPanel implements ToolPanel {
         bindKeys(open, saveAs);
     }
 
-    /** Opens the rendered manual in the system's browser, or says where it is and how to build it. */
+    /** Opens the manual in the system's browser, or says where it is. */
     private void openManual() {
         java.util.Optional<java.nio.file.Path> file = ManualLocator.find();
         if (file.isPresent() && java.awt.Desktop.isDesktopSupported()
@@ -138,9 +145,8 @@ public final class EddycastPanel implements ToolPanel {
             }
         }
         dialogs.tell("Manual", file.map(p -> "The manual is at " + p + ". Open it in a web browser.")
-                .orElse("The manual has not been built here. Build it with 'mvn -B verify' in the project "
-                        + "folder; it is written to target/manual/" + ManualLocator.FILE + ". Looked in: "
-                        + ManualLocator.candidates()));
+                .orElse("This build carries no manual. Build the tool with 'mvn -B -q package -DskipTests' in "
+                        + "the project folder, which puts the manual inside target/eddycast.jar."));
     }
 
     private void about() {
@@ -222,20 +228,23 @@ public final class EddycastPanel implements ToolPanel {
         if (!confirmDiscard()) {
             return false;
         }
-        Scenario s;
         try {
-            s = ScenarioReader.read(f);
+            // a file with bad values opens with them marked; only text that is not a scenario is refused
+            form.loadText(java.nio.file.Files.readString(f, java.nio.charset.StandardCharsets.UTF_8),
+                    f.toAbsolutePath().getParent());
         } catch (IOException | IllegalArgumentException e) {
             dialogs.tell("Could not open " + f.getFileName(), message(e));
             host.showStatus("Not opened: " + f.getFileName());
             return false;
         }
-        form.load(s, f.toAbsolutePath().getParent());
         file = f.toAbsolutePath();
         documentName = f.getFileName().toString();
         prefs.addRecent(file);
+        prefs.setLastFolder(file);
         setModified(false);
-        host.showStatus("Opened " + file);
+        int problems = problems(form.lastCheck()).size();
+        host.showStatus(problems == 0 ? "Opened " + file : "Opened " + file + " with " + problems + " problem"
+                + (problems == 1 ? "" : "s") + " marked in the form");
         return true;
     }
 
@@ -257,6 +266,7 @@ public final class EddycastPanel implements ToolPanel {
         documentName = f.getFileName().toString();
         form.setFolder(file.getParent());
         prefs.addRecent(file);
+        prefs.setLastFolder(file);
         setModified(false);
         host.showStatus("Saved " + file);
         return true;
@@ -279,20 +289,37 @@ public final class EddycastPanel implements ToolPanel {
     }
 
     private void openChosen() {
-        host.chooseFileToOpen("Open scenario", "json").ifPresent(this::open);
+        host.chooseFileToOpen("Open scenario", "json", startFolder()).ifPresent(this::open);
     }
 
-    private void openRecent() {
-        List<Path> recent = prefs.recentFiles();
-        if (recent.isEmpty()) {
-            host.showStatus("No recent scenario files yet.");
-            return;
+    /** The recent files as menu entries, newest first, each named by its file and showing its folder. */
+    private List<Action> recentActions() {
+        List<Action> list = new ArrayList<>();
+        int i = 1;
+        for (Path p : prefs.recentFiles()) {
+            Action a = action(i + "  " + p.getFileName(), i <= 9 ? KeyEvent.VK_0 + i : 0, null, () -> open(p));
+            a.putValue(Action.SHORT_DESCRIPTION, p.toString());
+            list.add(a);
+            i++;
         }
-        Object choice = javax.swing.JOptionPane.showInputDialog(host.dialogParent(), "Scenario file:", "Open recent",
-                javax.swing.JOptionPane.PLAIN_MESSAGE, null, recent.toArray(), recent.get(0));
-        if (choice instanceof Path p) {
-            open(p);
-        }
+        return list;
+    }
+
+    /** Where file dialogs start: the folder last used, else the bundled presets' folder, else the working one. */
+    Path startFolder() {
+        return prefs.lastFolder().orElseGet(() -> {
+            Path presets = Path.of("presets").toAbsolutePath();
+            return java.nio.file.Files.isDirectory(presets) ? presets : Path.of("").toAbsolutePath();
+        });
+    }
+
+    /** A file name for an output of the current scenario, in the start folder: "lowland-dye-summary.pdf". */
+    Path suggestedFile(String suffix) {
+        String typed = form.value("name").trim();
+        String name = lastResult != null ? lastResult.scenario().name()
+                : !typed.isEmpty() ? typed : documentName.replaceAll("\\.json$", "");
+        String slug = name.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
+        return startFolder().resolve((slug.isEmpty() ? "eddycast" : slug) + suffix);
     }
 
     private void save() {
@@ -304,7 +331,8 @@ public final class EddycastPanel implements ToolPanel {
     }
 
     private void saveAs() {
-        host.chooseFileToSave("Save scenario as", "json", file).ifPresent(this::saveTo);
+        host.chooseFileToSave("Save scenario as", "json", file != null ? file : suggestedFile(".json"))
+                .ifPresent(this::saveTo);
     }
 
     @Override
@@ -336,8 +364,9 @@ public final class EddycastPanel implements ToolPanel {
 
     private void formChanged() {
         setModified(true);
+        changedSinceResult = true;
         if (lastResult != null && worker == null) {
-            results.showStale();
+            results.showStale(null);
         }
     }
 
@@ -406,11 +435,7 @@ public final class EddycastPanel implements ToolPanel {
         results.showPreflight(List.of());
         progress.setValue(0);
         progress.setString("Cancelled");
-        if (lastResult != null) {
-            results.showResult(lastResult);
-        } else {
-            results.showEmpty();
-        }
+        showLastResult("the run with the new inputs was cancelled");
         host.showStatus("Run cancelled");
     }
 
@@ -422,11 +447,14 @@ public final class EddycastPanel implements ToolPanel {
         unlock();
         try {
             lastResult = w.get();
+            changedSinceResult = false;
             progress.setValue(1000);
-            progress.setString(String.format(Locale.ROOT, "Done in %.1f s", lastResult.diffusivity()
-                    .elapsedSeconds()));
+            progress.setString(lastResult.diffusivity().fromCache()
+                    ? "Done: reused an identical earlier simulation"
+                    : String.format(Locale.ROOT, "Done in %.1f s", lastResult.diffusivity().elapsedSeconds()));
             results.showResult(lastResult);
             keepAction.setEnabled(true);
+            exports.resultChanged(lastResult, results.options().count());
             host.showStatus("Finished " + lastResult.scenario().name());
             for (Consumer<StudyResult> l : resultListeners) {
                 l.accept(lastResult);
@@ -436,6 +464,7 @@ public final class EddycastPanel implements ToolPanel {
         } catch (ExecutionException e) {
             Throwable cause = e.getCause();
             progress.setValue(0);
+            showLastResult("the run with the new inputs did not finish");
             if (cause instanceof RunCancelledException) {
                 progress.setString("Cancelled");
                 return;
@@ -456,6 +485,18 @@ public final class EddycastPanel implements ToolPanel {
         }
     }
 
+    /** Shows the last finished result again after a run that did not finish, marked if the form moved on. */
+    private void showLastResult(String why) {
+        if (lastResult == null) {
+            results.showEmpty();
+            return;
+        }
+        results.showResult(lastResult);
+        if (changedSinceResult) {
+            results.showStale(why);
+        }
+    }
+
     private void unlock() {
         form.setRunning(false);
         runAction.setEnabled(true);
@@ -466,12 +507,18 @@ public final class EddycastPanel implements ToolPanel {
         if (lastResult == null) {
             return;
         }
-        String name = lastResult.scenario().name();
-        int n = results.options().count() + 1;
-        results.options().keep("option " + (char) ('A' + (n - 1) % 26) + ": " + name, lastResult);
+        String name = results.options().keep(lastResult);
+        int n = results.options().count();
         keepAction.setEnabled(false);
-        results.tabs().setSelectedIndex(results.tabs().getTabCount() - 1);
-        host.showStatus("Kept as option " + n + "; " + (n < 2 ? "keep another to compare." : "see Options."));
+        exports.resultChanged(lastResult, n);
+        results.tabs().setSelectedIndex(ResultsView.OPTIONS_TAB);
+        host.showStatus("Kept \u201c" + name + "\u201d as an option; " + (n < 2 ? "keep another to compare."
+                : n + " options compared on the Options tab."));
+    }
+
+    private void clearOptions() {
+        results.options().clear();
+        exports.resultChanged(lastResult, 0);
     }
 
     private void selfCheck() {
@@ -488,6 +535,8 @@ public final class EddycastPanel implements ToolPanel {
             }
         });
         d.setDefaultCloseOperation(javax.swing.WindowConstants.DISPOSE_ON_CLOSE);
+        panel.setCloser(d::dispose);
+        Dialogs.closeOnEscape(d);
         panel.start();
         d.setVisible(true);
     }

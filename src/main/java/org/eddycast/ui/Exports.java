@@ -19,8 +19,6 @@ import org.eddycast.plugin.HostContext;
 import org.eddycast.sheet.ChartRendering;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.CurveCsv;
-import org.eddycast.report.SummaryContent;
-import org.eddycast.sheet.SummarySheetLayout;
 import org.eddycast.sheet.SummarySheetPdf;
 import org.eddycast.sheet.SummarySheetPrintable;
 import org.eddycast.scenario.AtomicFiles;
@@ -33,38 +31,63 @@ final class Exports {
     private final Dialogs dialogs;
     private final Supplier<StudyResult> result;
     private final ResultsView view;
+    private final java.util.function.Function<String, Path> suggest;
+    private final List<Action> needResult = new java.util.ArrayList<>();
+    private Action optionsSheet;
 
-    Exports(HostContext host, Dialogs dialogs, Supplier<StudyResult> result, ResultsView view) {
+    /**
+     * @param suggest a suggested file for an output, given the end of its name ("-summary.pdf")
+     */
+    Exports(HostContext host, Dialogs dialogs, Supplier<StudyResult> result, ResultsView view,
+            java.util.function.Function<String, Path> suggest) {
         this.host = host;
         this.dialogs = dialogs;
         this.result = result;
         this.view = view;
+        this.suggest = suggest;
+    }
+
+    /** Enables the exports that have something to export: a result; two or more options for their sheet. */
+    void resultChanged(StudyResult r, int options) {
+        needResult.forEach(a -> a.setEnabled(r != null));
+        if (optionsSheet != null) {
+            optionsSheet.setEnabled(options >= 2);
+        }
+    }
+
+    /** An action disabled until there is a result. */
+    private Action needingResult(Action a) {
+        a.setEnabled(result.get() != null);
+        needResult.add(a);
+        return a;
     }
 
     Action sheetPdf() {
-        return EddycastPanel.action("Export summary sheet (PDF)\u2026", KeyEvent.VK_E, null, () -> withResult(r ->
-                host.chooseFileToSave("Summary sheet", "pdf", null).ifPresent(p -> guarded(p,
-                        () -> SummarySheetPdf.write(r, p)))));
+        return needingResult(EddycastPanel.action("Export summary sheet (PDF)\u2026", KeyEvent.VK_E, null,
+                () -> withResult(r -> host.chooseFileToSave("Summary sheet", "pdf", suggest.apply("-summary.pdf"))
+                        .ifPresent(p -> guarded(p, () -> SummarySheetPdf.write(r, p))))));
     }
 
     Action optionsPdf() {
-        return EddycastPanel.action("Export options sheet (PDF)\u2026", KeyEvent.VK_N, null, () -> {
+        optionsSheet = EddycastPanel.action("Export options sheet (PDF)\u2026", KeyEvent.VK_N, null, () -> {
             OptionsView options = view.options();
             if (options.count() < 2) {
                 dialogs.tell("No comparison yet", "Keep two or more results as options (Run \u25b8 Keep result as "
                         + "option, Ctrl+K) before exporting their comparison.");
                 return;
             }
-            host.chooseFileToSave("Options sheet", "pdf", null).ifPresent(p -> guarded(p,
+            host.chooseFileToSave("Options sheet", "pdf", suggest.apply("-options.pdf")).ifPresent(p -> guarded(p,
                     () -> SummarySheetPdf.writeOptions(options.names(), options.results(), p)));
         });
+        optionsSheet.setEnabled(false);
+        return optionsSheet;
     }
 
     Action print() {
-        return EddycastPanel.action("Print summary sheet\u2026", KeyEvent.VK_P, null, () -> withResult(r -> {
+        return needingResult(EddycastPanel.action("Print summary sheet\u2026", KeyEvent.VK_P, null,
+                () -> withResult(r -> {
             PrinterJob job = PrinterJob.getPrinterJob();
-            job.setPrintable(new SummarySheetPrintable(new SummarySheetLayout(SummaryContent.of(r),
-                    SummarySheetPdf.defaultCharts(r))));
+            job.setPrintable(new SummarySheetPrintable(SummarySheetPdf.layout(r)));
             if (job.printDialog()) {
                 try {
                     job.print();
@@ -72,25 +95,25 @@ final class Exports {
                     dialogs.tell("Not printed", e.getMessage());
                 }
             }
-        }));
+        })));
     }
 
     Action chartPng() {
-        return EddycastPanel.action("Export charts (PNG)\u2026", KeyEvent.VK_G, null, () -> withResult(r ->
-                host.chooseFileToSave("Charts as PNG", "png", null).ifPresent(p -> guarded(p,
-                        () -> writePng(view.charts(), p)))));
+        return needingResult(EddycastPanel.action("Export charts (PNG)\u2026", KeyEvent.VK_G, null,
+                () -> withResult(r -> host.chooseFileToSave("Charts as PNG", "png", suggest.apply("-charts.png"))
+                        .ifPresent(p -> guarded(p, () -> writePng(view.charts(), p))))));
     }
 
     Action chartSvg() {
-        return EddycastPanel.action("Export charts (SVG)\u2026", KeyEvent.VK_V, null, () -> withResult(r ->
-                host.chooseFileToSave("Charts as SVG", "svg", null).ifPresent(p -> guarded(p,
-                        () -> writeSvg(view.charts(), p)))));
+        return needingResult(EddycastPanel.action("Export charts (SVG)\u2026", KeyEvent.VK_V, null,
+                () -> withResult(r -> host.chooseFileToSave("Charts as SVG", "svg", suggest.apply("-charts.svg"))
+                        .ifPresent(p -> guarded(p, () -> writeSvg(view.charts(), p))))));
     }
 
     Action curvesCsv() {
-        return EddycastPanel.action("Export curves (CSV)\u2026", KeyEvent.VK_U, null, () -> withResult(r ->
-                host.chooseFileToSave("Curves as CSV", "csv", null).ifPresent(p -> guarded(p,
-                        () -> AtomicFiles.writeString(p, CurveCsv.text(r))))));
+        return needingResult(EddycastPanel.action("Export curves (CSV)\u2026", KeyEvent.VK_U, null,
+                () -> withResult(r -> host.chooseFileToSave("Curves as CSV", "csv", suggest.apply("-curves.csv"))
+                        .ifPresent(p -> guarded(p, () -> AtomicFiles.writeString(p, CurveCsv.text(r)))))));
     }
 
     /** The charts stacked in one PNG, 900 by 420 pixels each. */

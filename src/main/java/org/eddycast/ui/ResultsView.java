@@ -1,16 +1,19 @@
 package org.eddycast.ui;
 
 import java.awt.BorderLayout;
+import java.awt.event.KeyEvent;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import javax.swing.BorderFactory;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTabbedPane;
-import javax.swing.JTable;
-import javax.swing.JTextArea;
-import javax.swing.table.DefaultTableModel;
+import javax.swing.UIManager;
 import net.miginfocom.swing.MigLayout;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
@@ -18,95 +21,148 @@ import org.eddycast.forecast.Cautions;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.ChartSpecs;
+import org.eddycast.report.Headline;
 import org.eddycast.report.SpreadCurves;
 import org.eddycast.report.SummaryContent;
-import org.jfree.chart.ChartPanel;
 
 /**
- * The results side: charts (spread with its band, running diffusivity, the record's spectrum and
- * autocorrelation), the results table, the assumptions and cautions in plain view, and the comparison of
- * design options. Shows whatever a study result holds; the forecast results plug in through
+ * The results side: the answer on top, then one row of tabs grouped by what a user looks for (the forecast
+ * curves; the numbers; the handbook check; how well the run settled; the inputs, assumptions and cautions;
+ * design options compared). Shows whatever a study result holds; the forecast results plug in through
  * {@link SummaryContent}.
  */
 final class ResultsView extends JPanel {
 
+    /** Tab indices. */
+    static final int CURVES_TAB = 0;
+    static final int TABLES_TAB = 1;
+    static final int HANDBOOK_TAB = 2;
+    static final int QUALITY_TAB = 3;
+    static final int INPUTS_TAB = 4;
+    static final int OPTIONS_TAB = 5;
+
+    private static final String WIDTH = "Plume width";
+    private static final String PEAK = "Peak concentration";
+    private static final String RUNNING = "Running estimate of the eddy diffusivity";
+    private static final String SPREAD = "Spread of the particle cloud";
+    private static final String SPECTRUM = "Velocity spectrum of the record";
+    private static final String AUTOCORRELATION = "Autocorrelation of the record";
+
     private final JTabbedPane tabs = new JTabbedPane();
-    private final JPanel width = new JPanel(new BorderLayout());
-    private final JPanel peak = new JPanel(new BorderLayout());
+    private final ChartDeck curves = new ChartDeck("curves", entries(
+            WIDTH, "The forecast plume width appears here when a run finishes.",
+            PEAK, "The forecast peak concentration appears here when a run finishes."));
+    private final ChartDeck quality = new ChartDeck("quality", entries(
+            RUNNING, "The running eddy diffusivity appears here while the simulation runs.",
+            SPREAD, "The spread of the particle cloud appears here while the simulation runs.",
+            SPECTRUM, "For the measured-record route, the record's spectrum appears here.",
+            AUTOCORRELATION, "For the measured-record route, the record's autocorrelation appears here."));
     private final TextTable forecastTable = new TextTable("forecast");
-    private final JTextArea mixing = area("mixing");
+    private final WrappingText mixing = new WrappingText("mixing");
+    private final TextTable diffusivityTable = new TextTable("results");
     private final TextTable handbookTable = new TextTable("handbook");
-    private final JTextArea handbookNotes = area("handbookNotes");
-    private final JPanel spread = new JPanel(new BorderLayout());
-    private final JPanel settling = new JPanel(new BorderLayout());
-    private final JPanel record = new JPanel(new MigLayout("insets 0, wrap 1, fill", "[grow,fill]", "[grow,fill][grow,fill]"));
-    private final DefaultTableModel table = new DefaultTableModel(new Object[] {"quantity", "value", "95% interval",
-            "unit"}, 0) {
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return false;
-        }
-    };
-    private final JTable resultsTable = new JTable(table);
-    private final JTextArea reasoning = new JTextArea();
-    private final JLabel banner = new JLabel(" ");
-    /** The preflight warnings of the run (wrapped at a fixed width so a long one cannot widen the panel). */
-    private final JLabel preflight = new JLabel();
+    private final WrappingText handbookNotes = new WrappingText("handbookNotes");
+    private final WrappingText qualityNotes = new WrappingText("qualityNotes");
+    private final TextTable inputsTable = new TextTable("inputs");
+    private final WrappingText reasoning = new WrappingText("reasoning");
+    private final WrappingText banner = new WrappingText("banner");
+    private final JLabel stale = new JLabel();
+    /** The warnings given before the run, wrapping inside the panel. */
+    private final WrappingText preflight = new WrappingText("preflight");
     private List<String> preflightWarnings = List.of();
+    private final HeadlinePanel headline = new HeadlinePanel();
     private final OptionsView options = new OptionsView();
-    private ChartSpec spreadSpec;
-    private ChartSpec settlingSpec;
-    private ChartSpec widthSpec;
-    private ChartSpec peakSpec;
+    private boolean movedToQuality;
+    /** The tabs whose page scrolls: each shows its top again for a new result. */
+    private final List<JScrollPane> pages = new ArrayList<>();
+    private boolean hasResult;
 
     ResultsView() {
         super(new BorderLayout());
-        banner.putClientProperty("FlatLaf.styleClass", "medium");
-        banner.setBorder(javax.swing.BorderFactory.createEmptyBorder(6, 10, 6, 10));
-        preflight.setName("preflight");
-        preflight.setForeground(javax.swing.UIManager.getColor("Component.warning.focusedBorderColor"));
-        preflight.setBorder(javax.swing.BorderFactory.createEmptyBorder(0, 10, 6, 10));
+        banner.setBorder(BorderFactory.createEmptyBorder(4, 10, 2, 10));
+        stale.setName("stale");
+        stale.setVisible(false);
+        styleStale();
+        JPanel top = new JPanel(new MigLayout("insets 0, wrap 1, fillx, gapy 0, hidemode 3", "[grow,fill]"));
+        top.add(banner, "wmin 10");
+        top.add(stale, "wmin 10, gapx 8 8");
+        preflight.setBorder(BorderFactory.createEmptyBorder(0, 10, 4, 10));
         preflight.setVisible(false);
-        JPanel north = new JPanel(new BorderLayout());
-        north.add(banner, BorderLayout.NORTH);
-        north.add(preflight, BorderLayout.CENTER);
-        add(north, BorderLayout.NORTH);
-        resultsTable.setName("results");
-        resultsTable.setFillsViewportHeight(true);
-        reasoning.setEditable(false);
-        reasoning.setLineWrap(true);
-        reasoning.setWrapStyleWord(true);
-        reasoning.setName("reasoning");
-        JPanel forecast = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
-                "[pref!,fill][grow,fill]"));
-        forecast.add(forecastTable.scroll());
-        forecast.add(new JScrollPane(mixing), "h 80:120:n");
-        JPanel handbook = new JPanel(new MigLayout("insets dialog, wrap 1, fill", "[grow,fill]",
-                "[pref!,fill][grow,fill]"));
-        handbook.add(handbookTable.scroll());
-        handbook.add(new JScrollPane(handbookNotes), "h 80:120:n");
-        tabs.addTab("Width", width);
-        tabs.addTab("Peak", peak);
-        tabs.addTab("Forecast table", forecast);
-        tabs.addTab("Handbook", handbook);
-        tabs.addTab("Spread", spread);
-        tabs.addTab("Settling", settling);
-        tabs.addTab("Record", record);
-        JScrollPane diffusivity = new JScrollPane(resultsTable);
-        diffusivity.setColumnHeaderView(resultsTable.getTableHeader());
-        tabs.addTab("Diffusivity", diffusivity);
-        tabs.addTab("Assumptions and cautions", new JScrollPane(reasoning));
-        tabs.addTab("Options", options);
-        tabs.setTabLayoutPolicy(JTabbedPane.WRAP_TAB_LAYOUT);
-        int[] keys = {java.awt.event.KeyEvent.VK_W, java.awt.event.KeyEvent.VK_P, java.awt.event.KeyEvent.VK_T,
-                java.awt.event.KeyEvent.VK_H, java.awt.event.KeyEvent.VK_S, java.awt.event.KeyEvent.VK_E,
-                java.awt.event.KeyEvent.VK_C, java.awt.event.KeyEvent.VK_I, java.awt.event.KeyEvent.VK_A,
-                java.awt.event.KeyEvent.VK_O};
-        for (int i = 0; i < keys.length; i++) {
-            tabs.setMnemonicAt(i, keys[i]);
-        }
+        top.add(preflight, "wmin 10");
+        top.add(headline, "wmin 10");
+        add(top, BorderLayout.NORTH);
+        tabs.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        addTab("Curves", KeyEvent.VK_U, curves, "The forecast plume width and peak concentration over time or "
+                + "distance, with their 95% bands");
+        addTab("Tables", KeyEvent.VK_T, scrolled(column(
+                heading("Forecast at selected points"), forecastTable.scroll(), mixing,
+                heading("Eddy diffusivity and the figures of the run"), diffusivityTable.scroll())),
+                "The forecast and the eddy diffusivity as numbers, each with its 95% interval and unit");
+        addTab("Handbook", KeyEvent.VK_H, scrolled(column(handbookTable.scroll(), handbookNotes)),
+                "Published handbook estimates beside the simulated values, with their ratio and whether they "
+                        + "agree");
+        addTab("Run quality", KeyEvent.VK_Q, column(quality, qualityNotes),
+                "Whether the simulation ran long enough: the running estimate levelling off, the cloud's spread, "
+                        + "the measured record's spectrum, and any warnings");
+        addTab("Inputs and cautions", KeyEvent.VK_I, scrolled(column(heading("Inputs"), inputsTable.scroll(),
+                reasoning)), "The inputs this result was computed from, how each value was obtained, and the "
+                + "cautions");
+        addTab("Options", KeyEvent.VK_O, options, "Design options kept with Ctrl+K, compared side by side");
         add(tabs, BorderLayout.CENTER);
         showEmpty();
+    }
+
+    private void addTab(String title, int mnemonic, JComponent body, String tip) {
+        tabs.addTab(title, null, body, tip);
+        tabs.setMnemonicAt(tabs.getTabCount() - 1, mnemonic);
+    }
+
+    private static Map<String, String> entries(String... pairs) {
+        Map<String, String> m = new LinkedHashMap<>();
+        for (int i = 0; i < pairs.length; i += 2) {
+            m.put(pairs[i], pairs[i + 1]);
+        }
+        return m;
+    }
+
+    private static JLabel heading(String text) {
+        JLabel l = new JLabel(text);
+        l.putClientProperty("FlatLaf.styleClass", "h4");
+        return l;
+    }
+
+    private static JPanel column(JComponent... parts) {
+        JPanel p = new JPanel(new MigLayout("insets dialog, wrap 1, fillx", "[grow,fill]"));
+        for (JComponent c : parts) {
+            boolean grows = c instanceof ChartDeck;
+            p.add(c, grows ? "grow, push, wmin 10, hmin 160" : "wmin 10");
+        }
+        if (parts.length > 0 && parts[0] instanceof ChartDeck) {
+            ((MigLayout) p.getLayout()).setLayoutConstraints("insets 0, wrap 1, fill");
+        }
+        return p;
+    }
+
+    /** A page that scrolls down when the window is short, and follows the window's width. */
+    private JScrollPane scrolled(JPanel page) {
+        JScrollPane pane = ScrollPage.around(page);
+        pages.add(pane);
+        return pane;
+    }
+
+    private void styleStale() {
+        java.awt.Color warn = UIManager.getColor("Component.warning.focusedBorderColor");
+        stale.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 4, 0, 0,
+                warn == null ? java.awt.Color.ORANGE : warn), BorderFactory.createEmptyBorder(3, 8, 3, 8)));
+        stale.putClientProperty("FlatLaf.styleClass", "h4");
+    }
+
+    @Override
+    public void updateUI() {
+        super.updateUI();
+        if (stale != null) {
+            styleStale();
+        }
     }
 
     OptionsView options() {
@@ -117,45 +173,40 @@ final class ResultsView extends JPanel {
         return tabs;
     }
 
-    /** The charts currently shown (for export). */
+    /** The charts currently available (for export). */
     List<ChartSpec> charts() {
-        List<ChartSpec> list = new ArrayList<>();
-        if (widthSpec != null) {
-            list.add(widthSpec);
-        }
-        if (peakSpec != null) {
-            list.add(peakSpec);
-        }
-        if (spreadSpec != null) {
-            list.add(spreadSpec);
-        }
-        if (settlingSpec != null) {
-            list.add(settlingSpec);
-        }
+        List<ChartSpec> list = new ArrayList<>(curves.charts());
+        list.addAll(quality.charts());
         return list;
     }
 
-    /** The results table as text rows (for tests and the clipboard). */
+    /** The eddy diffusivity table as text rows (for tests and the clipboard). */
     List<List<String>> tableRows() {
-        List<List<String>> rows = new ArrayList<>();
-        for (int r = 0; r < table.getRowCount(); r++) {
-            List<String> row = new ArrayList<>();
-            for (int c = 0; c < table.getColumnCount(); c++) {
-                row.add(String.valueOf(table.getValueAt(r, c)));
-            }
-            rows.add(row);
+        return diffusivityTable.rows();
+    }
+
+    /** Every column heading of the result's tables (for tests: each has a tooltip). */
+    List<String> columnHeadings() {
+        List<String> all = new ArrayList<>();
+        for (TextTable t : List.of(forecastTable, diffusivityTable, handbookTable, inputsTable)) {
+            all.addAll(t.header());
         }
-        return rows;
+        return all;
+    }
+
+    /** The status line's text (for tests). */
+    String bannerText() {
+        return banner.getText();
     }
 
     /** Shows the warnings given before the run (an empty list hides them). */
     void showPreflight(List<String> warnings) {
         preflightWarnings = List.copyOf(warnings);
-        StringBuilder html = new StringBuilder("<html><body style='width: 560px'>");
+        StringBuilder text = new StringBuilder();
         for (String w : preflightWarnings) {
-            html.append("Before the run: ").append(w.replace("&", "&amp;").replace("<", "&lt;")).append("<br>");
+            text.append(text.length() == 0 ? "" : "\n").append("Before the run: ").append(w);
         }
-        preflight.setText(html.append("</body></html>").toString());
+        preflight.setText(text.toString());
         preflight.setVisible(!preflightWarnings.isEmpty());
     }
 
@@ -164,9 +215,14 @@ final class ResultsView extends JPanel {
         return preflight.isVisible() ? preflightWarnings : List.of();
     }
 
-    /** The banner's text (for tests). */
-    String bannerText() {
-        return banner.getText();
+    /** The stale-result banner's text, "" when the result is current (for tests). */
+    String staleText() {
+        return stale.isVisible() ? stale.getText() : "";
+    }
+
+    /** The headline as shown (for tests). */
+    String headlineText() {
+        return headline.text();
     }
 
     /** The forecast table's rows (for tests). */
@@ -185,105 +241,117 @@ final class ResultsView extends JPanel {
     }
 
     void showEmpty() {
-        banner.setText("No result yet: fill in the form and press Run (Ctrl+R).");
-        spreadSpec = null;
-        settlingSpec = null;
-        widthSpec = null;
-        peakSpec = null;
-        placeholder(width, "The forecast plume width appears here when a run finishes.");
-        placeholder(peak, "The forecast peak concentration appears here when a run finishes.");
+        hasResult = false;
+        banner.setText(" ");
+        stale.setVisible(false);
+        headline.show(null, "No result yet: fill in the form and press Run (Ctrl+R).");
+        curves.set(WIDTH, null, "The forecast plume width appears here when a run finishes.");
+        curves.set(PEAK, null, "The forecast peak concentration appears here when a run finishes.");
+        quality.set(RUNNING, null, "The running eddy diffusivity appears here while the simulation runs.");
+        quality.set(SPREAD, null, "The spread of the particle cloud appears here while the simulation runs.");
+        quality.set(SPECTRUM, null, null);
+        quality.set(AUTOCORRELATION, null, null);
         forecastTable.show(SummaryContent.Table.EMPTY);
         handbookTable.show(SummaryContent.Table.EMPTY);
+        diffusivityTable.show(SummaryContent.Table.EMPTY);
+        inputsTable.show(SummaryContent.Table.EMPTY);
         mixing.setText("");
         handbookNotes.setText("");
-        placeholder(spread, "The spread of the particle cloud appears here while the simulation runs.");
-        placeholder(settling, "The running eddy diffusivity appears here while the simulation runs.");
-        record.removeAll();
-        record.add(new JLabel("For the measured-record route, the record's spectrum and autocorrelation appear here.",
-                JLabel.CENTER));
-        table.setRowCount(0);
-        reasoning.setText(cautionsText(List.of()));
+        qualityNotes.setText("");
+        reasoning.setText(cautionsText(List.of(), Cautions.ALL));
     }
 
     /** Curves so far while a run is going. */
     void showPartial(SpreadCurves c, String status) {
         banner.setText(status);
-        spreadSpec = ChartSpecs.spread(c, "Spread of the particle cloud (so far)");
-        settlingSpec = ChartSpecs.settling(c, null);
-        chart(spread, spreadSpec);
-        chart(settling, settlingSpec);
+        quality.set(SPREAD, ChartSpecs.spread(c, "Spread of the particle cloud (so far)"), null);
+        quality.set(RUNNING, ChartSpecs.settling(c, null), null);
     }
-
-    /** Tab indices the run moves between. */
-    static final int WIDTH_TAB = 0;
-    static final int SPREAD_TAB = 4;
-
-    private boolean movedToSpread;
 
     void showRunning(String status) {
         banner.setText(status);
+        if (hasResult) {
+            stale.setText("A new run is going: the answer below is the previous result's.");
+            stale.setVisible(true);
+        } else {
+            headline.show(null, "The answer appears here when the run finishes.");
+        }
         // the forecast tabs stay empty until the end: show the curves that fill in meanwhile
-        if (tabs.getSelectedIndex() < SPREAD_TAB) {
-            tabs.setSelectedIndex(SPREAD_TAB);
-            movedToSpread = true;
+        if (tabs.getSelectedIndex() < QUALITY_TAB) {
+            tabs.setSelectedIndex(QUALITY_TAB);
+            quality.select(RUNNING);
+            movedToQuality = true;
         }
     }
 
-    void showStale() {
-        banner.setText("The inputs changed since this result: run again to update it.");
+    /** Marks the result on view as out of date: the form changed or a run was cancelled since it was made. */
+    void showStale(String why) {
+        stale.setText("Inputs changed since this result" + (why == null ? "" : " (" + why + ")")
+                + ": run again to update it.");
+        stale.setVisible(true);
+        revalidate();
     }
 
     void showResult(StudyResult s) {
-        if (movedToSpread && tabs.getSelectedIndex() == SPREAD_TAB) {
-            tabs.setSelectedIndex(WIDTH_TAB);
+        if (movedToQuality && tabs.getSelectedIndex() == QUALITY_TAB) {
+            tabs.setSelectedIndex(CURVES_TAB);
         }
-        movedToSpread = false;
+        movedToQuality = false;
+        hasResult = true;
+        stale.setVisible(false);
         DiffusivityResult r = s.diffusivity();
         SpreadCurves c = SpreadCurves.of(r);
-        spreadSpec = ChartSpecs.spread(c, "Spread of the particle cloud");
-        settlingSpec = ChartSpecs.settling(c, r.axes());
-        chart(spread, spreadSpec);
-        chart(settling, settlingSpec);
-        record.removeAll();
+        quality.set(SPREAD, ChartSpecs.spread(c, "Spread of the particle cloud"), null);
+        quality.set(RUNNING, ChartSpecs.settling(c, r.axes()), null);
         if (s.flow().analysis() != null) {
-            record.add(ThemeCharts.panel(ChartSpecs.spectrum(s.flow().analysis())));
-            record.add(ThemeCharts.panel(ChartSpecs.autocorrelation(s.flow().analysis())));
+            quality.set(SPECTRUM, ChartSpecs.spectrum(s.flow().analysis()), null);
+            quality.set(AUTOCORRELATION, ChartSpecs.autocorrelation(s.flow().analysis()), null);
         } else {
-            record.add(new JLabel("This route has no measured record.", JLabel.CENTER));
+            quality.set(SPECTRUM, null, "This route has no measured record.");
+            quality.set(AUTOCORRELATION, null, "This route has no measured record.");
         }
-        table.setRowCount(0);
         SummaryContent content = SummaryContent.of(s);
-        for (SummaryContent.Row row : content.results()) {
-            table.addRow(new Object[] {row.quantity(), row.value(), row.interval(), row.unit()});
-        }
+        diffusivityTable.show(rowsTable(List.of("quantity", "value", "95% interval", "unit"), content.results()));
+        inputsTable.show(rowsTable(List.of("input", "value", "unit"), content.inputs()));
         showForecast(s, content);
+        headline.show(Headline.of(s), null);
         reasoning.setText(cautionsText(content.assumptions(), content.cautions()));
         reasoning.setCaretPosition(0);
-        int warnings = s.flow().warnings().size() + r.warnings().size();
-        banner.setText(String.format(Locale.ROOT, "Result of \"%s\" (%.1f s)%s", s.scenario().name(),
-                r.elapsedSeconds(), warnings == 0 ? "" : ": " + warnings + " warning" + (warnings == 1 ? "" : "s")
-                        + ", see Assumptions and cautions"));
+        List<String> warnings = new ArrayList<>(s.flow().warnings());
+        warnings.addAll(r.warnings());
+        qualityNotes.setText(warnings.isEmpty() ? "No warnings: the running estimate settled within the run."
+                : "Warnings:\n" + String.join("\n", warnings.stream().map(w -> "\u2022 " + w).toList()));
+        String how = r.fromCache()
+                ? "reused an identical earlier simulation, no new run"
+                : String.format(Locale.ROOT, "simulated in %.1f s", r.elapsedSeconds());
+        banner.setText(String.format(Locale.ROOT, "Result of \"%s\" (%s)%s", s.scenario().name(), how,
+                warnings.isEmpty() ? "" : ": " + warnings.size() + " warning" + (warnings.size() == 1 ? "" : "s")
+                        + ", see Run quality"));
+        pages.forEach(ScrollPage::toTop);
         revalidate();
         repaint();
+    }
+
+    private static SummaryContent.Table rowsTable(List<String> header, List<SummaryContent.Row> rows) {
+        boolean interval = header.size() == 4;
+        return new SummaryContent.Table(header, rows.stream().map(r -> interval
+                ? List.of(r.quantity(), r.value(), r.interval(), r.unit())
+                : List.of(r.quantity(), r.value(), r.unit())).toList());
     }
 
     private void showForecast(StudyResult s, SummaryContent content) {
         Forecast f = s.forecast();
         if (f == null) {
-            widthSpec = null;
-            peakSpec = null;
-            placeholder(width, "This result carries no forecast.");
-            placeholder(peak, "This result carries no forecast.");
+            curves.set(WIDTH, null, "This result carries no forecast.");
+            curves.set(PEAK, null, "This result carries no forecast.");
             forecastTable.show(SummaryContent.Table.EMPTY);
             handbookTable.show(SummaryContent.Table.EMPTY);
-            mixing.setText("");
-            handbookNotes.setText("");
+            mixing.setText("This result carries no forecast.");
+            handbookNotes.setText("No handbook estimate applies without a forecast.");
             return;
         }
-        widthSpec = ChartSpecs.width(f, "Plume width");
-        peakSpec = ChartSpecs.peak(f);
-        chart(width, widthSpec);
-        chart(peak, peakSpec);
+        curves.set(WIDTH, ChartSpecs.width(f, "Plume width"), null);
+        curves.set(PEAK, ChartSpecs.peak(f), null);
         forecastTable.show(content.forecastTable());
         StringBuilder sb = new StringBuilder();
         for (SummaryContent.Row row : content.forecast()) {
@@ -292,7 +360,7 @@ final class ResultsView extends JPanel {
                 sb.append(' ').append(row.unit());
             }
             if (!row.interval().isEmpty()) {
-                sb.append("   95% interval ").append(row.interval()).append(' ').append(row.unit());
+                sb.append(", 95% interval ").append(row.interval()).append(' ').append(row.unit());
             }
             sb.append('\n');
         }
@@ -300,29 +368,22 @@ final class ResultsView extends JPanel {
                 .append(f.measure() == org.eddycast.forecast.WidthMeasure.FULL_WIDTH_AT_HALF_MAXIMUM
                         ? " (FWHM)" : "").append("; brackets hold the 95% band.");
         mixing.setText(sb.toString());
-        mixing.setCaretPosition(0);
         handbookTable.show(content.handbook());
-        // on screen: estimate, ratio, agreement, the two values, and the long formula and source last
+        // on screen: estimate, ratio, agreement and the two values; the long formula and source go to the notes
         if (!content.handbook().isEmpty()) {
             handbookTable.showInOrder(0, 4, 5, 2, 3, 1);
+            handbookTable.hide(1);
         }
-        handbookNotes.setText(content.handbookNotes().isEmpty()
-                ? "No handbook estimate applies to this flow route."
-                : String.join("\n\n", content.handbookNotes()));
-        handbookNotes.setCaretPosition(0);
+        List<String> notes = new ArrayList<>(content.handbookNotes());
+        for (List<String> row : content.handbook().rows()) {
+            notes.add(capitalized(row.get(0)) + ": " + row.get(1) + ".");
+        }
+        handbookNotes.setText(notes.isEmpty() ? "No handbook estimate applies to this flow route."
+                : String.join("\n\n", notes));
     }
 
-    private static JTextArea area(String name) {
-        JTextArea a = new JTextArea();
-        a.setEditable(false);
-        a.setLineWrap(true);
-        a.setWrapStyleWord(true);
-        a.setName(name);
-        return a;
-    }
-
-    private static String cautionsText(List<String> assumptions) {
-        return cautionsText(assumptions, Cautions.ALL);
+    private static String capitalized(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 
     private static String cautionsText(List<String> assumptions, List<String> cautions) {
@@ -330,30 +391,14 @@ final class ResultsView extends JPanel {
         if (!assumptions.isEmpty()) {
             sb.append("How this result was obtained\n");
             for (String a : assumptions) {
-                sb.append("  \u2022 ").append(a).append('\n');
+                sb.append("\u2022 ").append(a).append('\n');
             }
             sb.append('\n');
         }
         sb.append("Cautions\n");
         for (String c : cautions) {
-            sb.append("  \u2022 ").append(c).append('\n');
+            sb.append("\u2022 ").append(c).append('\n');
         }
         return sb.toString();
-    }
-
-    private static void placeholder(JPanel p, String text) {
-        p.removeAll();
-        p.add(new JLabel(text, JLabel.CENTER), BorderLayout.CENTER);
-        p.revalidate();
-    }
-
-    private static void chart(JPanel p, ChartSpec spec) {
-        if (p.getComponentCount() == 1 && p.getComponent(0) instanceof ChartPanel cp) {
-            cp.setChart(org.eddycast.sheet.ChartRendering.chart(spec, ThemeCharts.palette(), ThemeCharts.font()));
-            return;
-        }
-        p.removeAll();
-        p.add(ThemeCharts.panel(spec), BorderLayout.CENTER);
-        p.revalidate();
     }
 }

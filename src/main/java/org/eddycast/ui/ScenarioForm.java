@@ -15,7 +15,6 @@ import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.Timer;
 import javax.swing.event.DocumentEvent;
@@ -51,7 +50,7 @@ public final class ScenarioForm extends JPanel {
 
     private final List<FieldRow> rows = new ArrayList<>();
     private final JComboBox<String> route = new JComboBox<>(FormLayout.ROUTES.toArray(String[]::new));
-    private final JTextArea otherProblems = new JTextArea();
+    private final WrappingText otherProblems = new WrappingText("problems");
     private final Timer recheck;
     private final List<Runnable> changeListeners = new ArrayList<>();
     private ObjectNode base = MAPPER.createObjectNode();
@@ -60,7 +59,8 @@ public final class ScenarioForm extends JPanel {
     private boolean loading;
 
     public ScenarioForm() {
-        super(new MigLayout("insets dialog, wrap 3, hidemode 3, gapy 2", "[right][grow,fill,sizegroup v][left]"));
+        // labels and units keep their width; the fields give way down to 80 pixels when the window is narrow
+        super(new MigLayout("insets dialog, wrap 3, hidemode 3, gapy 2", "[right,pref!][grow,fill,sizegroup v,80:pref][left,pref!]"));
         recheck = new Timer(200, e -> check());
         recheck.setRepeats(false);
         JLabel routeLabel = new JLabel(FormText.plain("route.label"));
@@ -83,7 +83,7 @@ public final class ScenarioForm extends JPanel {
             add(title, "span, left, gaptop para, gapbottom 2");
             if (section.key().equals("section.flow")) {
                 add(routeLabel);
-                add(route, "wrap");
+                add(route, "span 2, wmin 60, wrap");
             }
             for (FieldSpec spec : section.fields()) {
                 FieldRow row = new FieldRow(spec);
@@ -91,16 +91,32 @@ public final class ScenarioForm extends JPanel {
                 row.addTo(this);
             }
         }
-        otherProblems.setEditable(false);
-        otherProblems.setLineWrap(true);
-        otherProblems.setWrapStyleWord(true);
-        otherProblems.setOpaque(false);
-        otherProblems.setFocusable(false);
         otherProblems.putClientProperty("FlatLaf.styleClass", "small");
-        otherProblems.setForeground(javax.swing.UIManager.getColor("Component.error.focusedBorderColor"));
-        otherProblems.setName("problems");
+        otherProblems.setForeground(ThemeColours.problemText());
         add(otherProblems, "span, growx, wmin 10, gaptop para");
         routeChanged();
+    }
+
+    /** Asks for a file given the folder to start in; the panel sets it to the host's file dialog. */
+    public interface FileChooser {
+        java.util.Optional<Path> choose(Path startFolder);
+    }
+
+    private FileChooser recordChooser = start -> java.util.Optional.empty();
+
+    /** Sets how the record field's Browse button asks for a file. */
+    public void setRecordChooser(FileChooser chooser) {
+        recordChooser = chooser;
+    }
+
+    private void browseFor(FieldRow row) {
+        recordChooser.choose(folder).ifPresent(p -> {
+            Path abs = p.toAbsolutePath().normalize();
+            Path f = folder.toAbsolutePath().normalize();
+            // relative to the scenario's folder when it lies under it, so the scenario can move with its record
+            row.setText(abs.startsWith(f) ? f.relativize(abs).toString().replace('\\', '/') : abs.toString());
+            check();
+        });
     }
 
     /** Runs after every change the user makes, once the form has been checked again. */
@@ -110,18 +126,46 @@ public final class ScenarioForm extends JPanel {
 
     /** Fills the form from a scenario; fields the form does not show are kept as they are. */
     public void load(Scenario s, Path scenarioFolder) {
+        ObjectNode tree = ScenarioWriter.tree(s);
+        if (s.flow() instanceof org.eddycast.scenario.MeasuredFlow m) {
+            // the writer keeps the path as written; show it as written
+            ((ObjectNode) tree.path("flow")).put("record", m.record());
+        }
+        loadTree(tree, scenarioFolder);
+    }
+
+    /**
+     * Fills the form from a scenario file's text even when some values are not valid, so a file with a bad
+     * value opens with that field marked instead of being refused. Text that is not JSON at all is refused with
+     * its line and column.
+     *
+     * @throws ScenarioException when the text is not a JSON object
+     */
+    public void loadText(String json, Path scenarioFolder) {
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(json);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            // the reader words the syntax error with its line and column
+            ScenarioReader.parse(json, scenarioFolder);
+            throw new ScenarioException("not valid JSON (" + e.getOriginalMessage() + ")");
+        }
+        if (!(root instanceof ObjectNode tree) || !(tree.path("flow") instanceof ObjectNode)) {
+            ScenarioReader.parse(json, scenarioFolder);
+            throw new ScenarioException("a scenario must be a JSON object with a \"flow\" object");
+        }
+        loadTree(tree, scenarioFolder);
+    }
+
+    private void loadTree(ObjectNode tree, Path scenarioFolder) {
         loading = true;
         try {
-            base = ScenarioWriter.tree(s);
+            base = tree;
             folder = scenarioFolder == null ? Path.of("").toAbsolutePath() : scenarioFolder;
             JsonNode flow = base.path("flow");
             String kind = flow.path("kind").asText();
             if (FormLayout.ROUTES.contains(kind)) {
                 route.setSelectedItem(kind);
-            }
-            if (s.flow() instanceof org.eddycast.scenario.MeasuredFlow m) {
-                // the writer keeps the path as written; show it as written
-                ((ObjectNode) flow).put("record", m.record());
             }
             for (FieldRow row : rows) {
                 if (row.spec.route() == null || row.spec.route().equals(kind)) {
@@ -159,26 +203,28 @@ public final class ScenarioForm extends JPanel {
         List<String> other = new ArrayList<>();
         ObjectNode tree = build(fieldProblems);
         Scenario scenario = null;
-        if (fieldProblems.isEmpty()) {
-            try {
-                scenario = ScenarioReader.parse(tree.toString(), folder);
-            } catch (ScenarioException e) {
-                for (String p : e.problems()) {
-                    FieldRow row = rowNamedIn(p);
-                    if (row != null && !fieldProblems.containsKey(row.spec.path())) {
-                        fieldProblems.put(row.spec.path(), p);
-                    } else {
-                        other.add(p);
-                    }
+        // the file's own checks run even when a field could not be read, so every problem shows at once
+        try {
+            Scenario parsed = ScenarioReader.parse(tree.toString(), folder);
+            scenario = fieldProblems.isEmpty() ? parsed : null;
+        } catch (ScenarioException e) {
+            for (String p : e.problems()) {
+                FieldRow row = rowNamedIn(p);
+                if (row == null) {
+                    other.add(inFormWords(p));
+                } else if (!fieldProblems.containsKey(row.spec.path())) {
+                    fieldProblems.put(row.spec.path(), inFormWords(p));
                 }
-            } catch (IllegalArgumentException e) {
-                other.add(e.getMessage());
+                // else: the field could not be read at all, and that message says more
             }
+        } catch (IllegalArgumentException e) {
+            other.add(inFormWords(String.valueOf(e.getMessage())));
         }
         for (FieldRow row : rows) {
             row.showProblem(row.visible() ? fieldProblems.get(row.spec.path()) : null);
         }
         otherProblems.setText(String.join("\n", other));
+        otherProblems.setForeground(ThemeColours.problemText());
         otherProblems.setVisible(!other.isEmpty());
         last = new Check(scenario, fieldProblems, other);
         revalidate();
@@ -188,6 +234,17 @@ public final class ScenarioForm extends JPanel {
     /** The outcome of the latest check. */
     public Check lastCheck() {
         return last;
+    }
+
+    /** Every field's problem as shown under it, by field path (for tests). */
+    public Map<String, String> shownProblems() {
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (FieldRow row : rows) {
+            if (row.problem.isVisible()) {
+                shown.put(row.spec.path(), row.problem.getText());
+            }
+        }
+        return shown;
     }
 
     /** Locks the inputs that define a running simulation; name and forecast settings stay editable. */
@@ -243,7 +300,45 @@ public final class ScenarioForm extends JPanel {
         return fallback;
     }
 
-    /** The visible field a reader message names: the longest path it contains (design checks say "flow."). */
+    /**
+     * A reader message in the form's words: each field path or key it names ("flow.depth", "tankDiameter")
+     * becomes the field's label on the form ("Depth h", "Tank diameter T").
+     */
+    String inFormWords(String message) {
+        String out = message;
+        List<FieldRow> byLength = new ArrayList<>(rows);
+        byLength.sort((a, b) -> b.spec.path().length() - a.spec.path().length());
+        for (FieldRow row : byLength) {
+            if (!row.visible()) {
+                continue;
+            }
+            String label = "\u201c" + row.label.getText() + "\u201d";
+            for (String name : List.of(row.spec.path(), route() + "." + row.spec.key(), row.spec.key())) {
+                // plain words ("name", "depth") stay words; paths and camel-case keys are field names
+                if (name.contains(".") || !name.equals(name.toLowerCase(Locale.ROOT))) {
+                    out = replaceName(out, name, label);
+                }
+            }
+        }
+        return Character.toUpperCase(out.charAt(0)) + out.substring(1);
+    }
+
+    private static String replaceName(String text, String name, String label) {
+        StringBuilder sb = new StringBuilder();
+        int from = 0;
+        int i = text.indexOf(name);
+        while (i >= 0) {
+            int end = i + name.length();
+            if (standsAlone(text, i, end)) {
+                sb.append(text, from, i).append(label);
+                from = end;
+            }
+            i = text.indexOf(name, end);
+        }
+        return sb.append(text.substring(from)).toString();
+    }
+
+    /** The visible field a reader message names: the longest path it contains (design checks say "tank."). */
     private FieldRow rowNamedIn(String problem) {
         FieldRow best = null;
         for (FieldRow row : rows) {
@@ -264,14 +359,19 @@ public final class ScenarioForm extends JPanel {
         return best;
     }
 
+    /** Whether text[start, end) is a whole name: not part of a longer word or of a dotted path. */
+    private static boolean standsAlone(String text, int start, int end) {
+        boolean startOk = start == 0 || !Character.isLetterOrDigit(text.charAt(start - 1))
+                && text.charAt(start - 1) != '.';
+        boolean endOk = end == text.length() || !Character.isLetterOrDigit(text.charAt(end))
+                && text.charAt(end) != '.';
+        return startOk && endOk;
+    }
+
     private static boolean mentions(String text, String name) {
         int i = text.indexOf(name);
         while (i >= 0) {
-            int end = i + name.length();
-            boolean startOk = i == 0 || !Character.isLetterOrDigit(text.charAt(i - 1)) && text.charAt(i - 1) != '.';
-            boolean endOk = end == text.length() || !Character.isLetterOrDigit(text.charAt(end))
-                    && text.charAt(end) != '.';
-            if (startOk && endOk) {
+            if (standsAlone(text, i, i + name.length())) {
                 return true;
             }
             i = text.indexOf(name, i + 1);
@@ -305,7 +405,7 @@ public final class ScenarioForm extends JPanel {
             parent.remove(row.spec.key());
             if (text.isEmpty()) {
                 if (!row.spec.optional() && row.spec.kind() != FieldSpec.Kind.TEXT) {
-                    problems.put(row.spec.path(), row.spec.path() + " is empty: enter a value"
+                    problems.put(row.spec.path(), "\u201c" + row.label.getText() + "\u201d is empty: enter a value"
                             + (row.spec.unit().isEmpty() ? "" : " in " + row.spec.unit()));
                 }
                 continue;
@@ -314,7 +414,8 @@ public final class ScenarioForm extends JPanel {
                 case NUMBER -> {
                     Double v = parseNumber(text);
                     if (v == null) {
-                        problems.put(row.spec.path(), row.spec.path() + ": \"" + text + "\" is not a number; write"
+                        problems.put(row.spec.path(), "\u201c" + row.label.getText() + "\u201d: \"" + text
+                                + "\" is not a number; write"
                                 + " it like 0.25 or 4e-10" + (row.spec.unit().isEmpty() ? "" : " (in "
                                 + row.spec.unit() + ")"));
                     } else {
@@ -325,7 +426,8 @@ public final class ScenarioForm extends JPanel {
                     try {
                         parent.put(row.spec.key(), Long.parseLong(text));
                     } catch (NumberFormatException e) {
-                        problems.put(row.spec.path(), row.spec.path() + ": \"" + text + "\" is not a whole number");
+                        problems.put(row.spec.path(), "\u201c" + row.label.getText() + "\u201d: \"" + text
+                                + "\" is not a whole number");
                     }
                 }
                 case FLAG -> parent.put(row.spec.key(), Boolean.parseBoolean(text));
@@ -396,7 +498,8 @@ public final class ScenarioForm extends JPanel {
         final JLabel label;
         final JComponent editor;
         final JLabel unit;
-        final JLabel problem = new JLabel();
+        final WrappingText problem = new WrappingText("problem");
+        javax.swing.JButton browseButton;
         private boolean shown = true;
 
         FieldRow(FieldSpec spec) {
@@ -456,16 +559,31 @@ public final class ScenarioForm extends JPanel {
                 label.setDisplayedMnemonic(m);
             }
             unit = new JLabel(spec.unit());
+            problem.setName("problem:" + editor.getName());
             problem.putClientProperty("FlatLaf.styleClass", "small");
-            problem.setForeground(javax.swing.UIManager.getColor("Component.error.focusedBorderColor"));
+            problem.setForeground(ThemeColours.problemText());
             problem.setVisible(false);
         }
 
         void addTo(JPanel p) {
             p.add(label);
-            p.add(editor);
-            p.add(unit, "wmin 40");
-            p.add(problem, "skip, span 2, wmin 10, gapbottom 3");
+            if (spec.kind() == FieldSpec.Kind.CHOICE) {
+                // a chooser has no unit: it takes the unit's column too, so its longest choice shows in full
+                p.add(editor, "span 2, wmin 60");
+            } else if (spec.kind() == FieldSpec.Kind.TEXT && spec.path().equals("flow.record")) {
+                p.add(editor, "wmin 60");
+                javax.swing.JButton browse = new javax.swing.JButton("Browse\u2026");
+                browse.setName("browse:" + spec.path());
+                browse.setMnemonic('B');
+                browse.setToolTipText("Choose the velocity record file (CSV)");
+                browse.addActionListener(e -> browseFor(this));
+                p.add(browse);
+                browseButton = browse;
+            } else {
+                p.add(editor, "wmin 60");
+                p.add(unit, "wmin 40");
+            }
+            p.add(problem, "skip, span 2, growx, wmin 10, gapbottom 3");
         }
 
         boolean visible() {
@@ -477,6 +595,9 @@ public final class ScenarioForm extends JPanel {
             label.setVisible(v);
             editor.setVisible(v);
             unit.setVisible(v);
+            if (browseButton != null) {
+                browseButton.setVisible(v);
+            }
             if (!v) {
                 problem.setVisible(false);
             }
@@ -484,6 +605,8 @@ public final class ScenarioForm extends JPanel {
 
         void showProblem(String text) {
             problem.setText(text == null ? "" : text);
+            // the colour of the theme in force now (the theme may have been switched since)
+            problem.setForeground(ThemeColours.problemText());
             problem.setToolTipText(text);
             problem.setVisible(text != null && shown);
             editor.putClientProperty("JComponent.outline", text == null ? null : "error");
@@ -511,6 +634,8 @@ public final class ScenarioForm extends JPanel {
         void setText(String t) {
             if (editor instanceof JTextField f) {
                 f.setText(t);
+                // a long value shows its beginning, not its end
+                f.setCaretPosition(0);
             } else if (editor instanceof JCheckBox b) {
                 b.setSelected(Boolean.parseBoolean(t));
             } else {

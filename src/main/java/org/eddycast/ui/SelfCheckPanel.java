@@ -6,10 +6,7 @@ import java.util.Locale;
 import javax.swing.JButton;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
-import javax.swing.JScrollPane;
-import javax.swing.JTable;
 import javax.swing.SwingWorker;
-import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.eddycast.engine.VerificationCase;
 import org.eddycast.engine.VerificationSuite;
@@ -22,13 +19,10 @@ import org.eddycast.particles.Cancellation;
  */
 final class SelfCheckPanel extends JPanel {
 
-    private final DefaultTableModel model = new DefaultTableModel(new Object[] {"case", "expected", "computed",
-            "deviation (standard errors)", "outcome", "source"}, 0) {
-        @Override
-        public boolean isCellEditable(int row, int column) {
-            return false;
-        }
-    };
+    private static final List<String> HEADER = List.of("case", "expected", "computed",
+            "deviation (standard errors)", "outcome", "source");
+    private final TextTable table = new TextTable("selfCheck");
+    private final List<List<String>> shown = new ArrayList<>();
     private final JProgressBar bar = new JProgressBar(0, 1000);
     private final Cancellation cancel = new Cancellation();
     private final List<VerificationCase> cases;
@@ -36,25 +30,46 @@ final class SelfCheckPanel extends JPanel {
     private Worker worker;
 
     SelfCheckPanel(List<VerificationCase> cases, int threads) {
-        super(new MigLayout("insets dialog, wrap 2, fill", "[grow,fill][]", "[grow,fill][]"));
+        super(new MigLayout("insets dialog, wrap 3, fill", "[grow,fill][][]", "[grow,fill][]"));
         this.cases = List.copyOf(cases);
         this.threads = threads;
-        JTable table = new JTable(model);
-        table.setName("selfCheck");
-        add(new JScrollPane(table), "span, w 820, h 220");
+        table.show(new org.eddycast.report.SummaryContent.Table(HEADER, shown));
+        // every cell in full: the columns take their widest line and the table scrolls sideways
+        add(table.scroll(), "span, w 300:820, h 220");
         bar.setStringPainted(true);
         bar.setString(this.cases.size() + " cases to run");
         add(bar);
         JButton stop = new JButton("Stop");
         stop.setMnemonic('S');
         stop.addActionListener(e -> stop());
-        add(stop);
+        add(stop, "sizegroup b");
+        JButton close = new JButton("Close");
+        close.setMnemonic('C');
+        close.setName("close");
+        close.addActionListener(e -> closer.run());
+        add(close, "sizegroup b");
+    }
+
+    private Runnable closer = () -> { };
+
+    /** What Close does: the dialog sets it to close itself (which also stops the run). */
+    void setCloser(Runnable r) {
+        closer = r;
     }
 
     /** Starts the cases in the background. */
     void start() {
         if (worker == null) {
             worker = new Worker();
+            // the bar moves while a case runs, not only when it finishes
+            worker.addPropertyChangeListener(e -> {
+                if ("progress".equals(e.getPropertyName()) && !cancel.isCancelled() && !worker.isDone()) {
+                    int percent = (Integer) e.getNewValue();
+                    bar.setValue(percent * 10);
+                    bar.setString(String.format(Locale.ROOT, "%d%%: case %d of %d", percent,
+                            Math.min(cases.size(), shown.size() + 1), cases.size()));
+                }
+            });
             worker.execute();
         }
     }
@@ -72,15 +87,7 @@ final class SelfCheckPanel extends JPanel {
 
     /** The table's rows as text. */
     List<List<String>> rows() {
-        List<List<String>> rows = new ArrayList<>();
-        for (int r = 0; r < model.getRowCount(); r++) {
-            List<String> row = new ArrayList<>();
-            for (int c = 0; c < model.getColumnCount(); c++) {
-                row.add(String.valueOf(model.getValueAt(r, c)));
-            }
-            rows.add(row);
-        }
-        return rows;
+        return table.rows();
     }
 
     String statusText() {
@@ -105,7 +112,10 @@ final class SelfCheckPanel extends JPanel {
 
         @Override
         protected void process(List<Object[]> rows) {
-            rows.forEach(model::addRow);
+            for (Object[] r : rows) {
+                shown.add(java.util.Arrays.stream(r).map(String::valueOf).toList());
+            }
+            table.show(new org.eddycast.report.SummaryContent.Table(HEADER, shown));
             bar.setValue(getProgress() * 10);
         }
 

@@ -21,6 +21,23 @@ final class UiPreferences {
         return new UiPreferences(Preferences.userRoot().node("org/eddycast/ui"));
     }
 
+    private static final String LAST_FOLDER = "lastFolder";
+
+    /** The folder a file was last opened from or saved to, if it still exists. */
+    java.util.Optional<Path> lastFolder() {
+        String s = node.get(LAST_FOLDER, null);
+        return s == null ? java.util.Optional.empty()
+                : java.util.Optional.of(Path.of(s)).filter(java.nio.file.Files::isDirectory);
+    }
+
+    /** Remembers the folder of a file just opened or saved. */
+    void setLastFolder(Path file) {
+        Path folder = file.toAbsolutePath().getParent();
+        if (folder != null) {
+            node.put(LAST_FOLDER, folder.toString());
+        }
+    }
+
     /** The recently used scenario files, newest first. */
     List<Path> recentFiles() {
         List<Path> list = new ArrayList<>();

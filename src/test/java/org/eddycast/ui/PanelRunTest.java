@@ -81,8 +81,9 @@ class PanelRunTest {
         });
         Preferences prefs = Preferences.userRoot().node("org/eddycast/ui-test");
         EddycastPanel[] holder = new EddycastPanel[1];
+        TestHost host = new TestHost();
         onEdt(() -> {
-            holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(), new UiPreferences(prefs));
+            holder[0] = new EddycastPanel(host, new TestDialogs(), new UiPreferences(prefs));
             holder[0].setThreads(2);
             holder[0].showScenario(BundledPresets.standard(), BundledPresets.folder(), "mixing-tank-dose.json");
         });
@@ -92,7 +93,12 @@ class PanelRunTest {
         // set fields as a user would
         onEdt(() -> panel.form().setValue("flow.rmsVelocity", "0.05"));
         onEdt(() -> assertTrue(panel.form().lastCheck().valid(), () -> panel.form().lastCheck().toString()));
+        onEdt(() -> assertFalse(host.action("Export summary sheet (PDF)\u2026").isEnabled(), "no result, no export"));
+        onEdt(() -> assertTrue(host.action("Open recent").getValue(HostContext.SUBMENU_ITEMS) != null,
+                "open recent is a submenu"));
         runAndWait(panel, null);
+        onEdt(() -> assertTrue(host.action("Export summary sheet (PDF)\u2026").isEnabled(), "a result to export"));
+        onEdt(() -> assertFalse(host.action("Export options sheet (PDF)\u2026").isEnabled(), "no options yet"));
         shot(panel, "results", theme);
         List<List<String>> rows = callEdt(() -> panel.results().tableRows());
         assertEquals("eddy diffusivity along x", rows.get(0).get(0));
@@ -117,18 +123,25 @@ class PanelRunTest {
         runAndWait(panel, null);
         onEdt(() -> panel.keepAction().actionPerformed(null));
         String verdict = callEdt(() -> panel.results().options().verdictText());
-        // u' doubled at fixed L and tau: the option with 0.1 m/s must spread faster
-        assertTrue(verdict.contains("faster"), verdict);
+        // u' doubled at fixed L and tau: the option with 0.1 m/s must spread faster; the options keep the
+        // scenario's own name, the second one numbered
+        assertTrue(verdict.startsWith("\u201cTiny test flow (2)\u201d spreads the tracer fastest"), verdict);
+        assertEquals(1, verdict.split("\\. ").length, "one sentence: " + verdict);
+        assertTrue(callEdt(() -> panel.results().options().detailsText()).contains("faster"));
         shot(panel, "comparison", theme);
+        noLabelCutOff(panel, theme, ResultsView.OPTIONS_TAB);
 
         // an input error: named under its field, the run refuses, nothing crashes
         onEdt(() -> panel.form().setValue("flow.integralLength", "-2"));
         ScenarioForm.Check bad = callEdt(() -> panel.form().lastCheck());
         assertFalse(bad.valid());
-        assertTrue(bad.fieldProblems().get("flow.integralLength").contains("flow.integralLength"));
+        assertTrue(bad.fieldProblems().get("flow.integralLength").startsWith("\u201cIntegral length L\u201d must"),
+                bad.fieldProblems().toString());
         onEdt(() -> panel.runAction().actionPerformed(null));
         assertFalse(callEdt(panel::isRunning));
-        onEdt(() -> panel.results().tabs().setSelectedIndex(0));
+        assertTrue(callEdt(() -> panel.results().staleText()).startsWith("Inputs changed since this result"),
+                "an edit after a result marks it as out of date");
+        onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.CURVES_TAB));
         shot(panel, "input-error", theme);
         onEdt(() -> panel.form().setValue("flow.integralLength", "abc"));
         assertTrue(callEdt(() -> panel.form().lastCheck().fieldProblems().get("flow.integralLength"))
@@ -138,17 +151,127 @@ class PanelRunTest {
         onEdt(() -> panel.showScenario(ScenarioReader.parse(org.eddycast.sheet.ForecastSheetTest.CHANNEL), tmp,
                 "channel.json"));
         runAndWait(panel, null);
-        onEdt(() -> panel.results().tabs().setSelectedIndex(0));
+        assertEquals("", callEdt(() -> panel.results().staleText()), "a new result is current");
+        // the same case again: the engine reuses the simulation, and the window says so rather than a run time
+        runAndWait(panel, null);
+        assertEquals("Done: reused an identical earlier simulation", callEdt(panel::progressText));
+        assertTrue(callEdt(() -> panel.results().bannerText()).contains("reused an identical earlier simulation"));
+        String headline = callEdt(() -> panel.results().headlineText());
+        assertEquals(org.eddycast.report.Headline.of(panel.lastResult()).text(), headline);
+        assertTrue(headline.startsWith("Distance to mixed"), headline);
+        onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.CURVES_TAB));
         shot(panel, "channel-width", theme);
-        onEdt(() -> panel.results().tabs().setSelectedIndex(3));
+        onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.HANDBOOK_TAB));
         shot(panel, "channel-handbook", theme);
+        for (int tab = 0; tab < ResultsView.OPTIONS_TAB; tab++) {
+            noLabelCutOff(panel, theme, tab);
+        }
+        // every column heading and every chart axis explains its term in a tooltip
+        for (String h : callEdt(() -> panel.results().columnHeadings())) {
+            assertNotNull(Glossary.definition(h), "no tooltip for the column " + h);
+        }
+        for (org.eddycast.report.ChartSpec c : callEdt(() -> panel.results().charts())) {
+            assertNotNull(Glossary.definition(c.xLabel()), "no tooltip for the axis " + c.xLabel());
+            assertNotNull(Glossary.definition(c.yLabel()), "no tooltip for the axis " + c.yLabel());
+        }
+        if (theme.equals("light")) {
+            // a switch of theme (View menu) redraws the charts in the new theme's colours
+            onEdt(() -> {
+                panel.results().tabs().setSelectedIndex(ResultsView.CURVES_TAB);
+                FlatDarkLaf.setup();
+                SwingUtilities.updateComponentTreeUI(panel.component());
+                org.jfree.chart.ChartPanel chart = find(panel.component(), org.jfree.chart.ChartPanel.class);
+                assertEquals(javax.swing.UIManager.getColor("Panel.background"), chart.getChart()
+                        .getBackgroundPaint(), "the chart follows the theme");
+            });
+            shot(panel, "theme-switched-dark");
+            onEdt(() -> {
+                FlatLightLaf.setup();
+                SwingUtilities.updateComponentTreeUI(panel.component());
+            });
+        }
         List<List<String>> handbook = callEdt(() -> panel.results().handbookRows());
         assertEquals(panel.lastResult().forecast().handbook().size(), handbook.size());
         assertTrue(handbook.get(1).get(1).startsWith("eps_t = 0.15 h u*"), handbook.get(1).toString());
-        onEdt(() -> panel.results().tabs().setSelectedIndex(2));
+        onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.TABLES_TAB));
         shot(panel, "channel-forecast-table", theme);
         prefs.removeNode();
         onEdt(() -> setTheme("light"));
+    }
+
+    /** The smallest window the panel must serve: 1024 x 700 less the title bar, the menu bar and the status line. */
+    static final Dimension SMALL = new Dimension(1024, 640);
+
+    /**
+     * Renders the panel at {@link #SMALL} with one results tab chosen, writes a screenshot, and checks that no
+     * text is cut off: every label, button and chooser showing is at least as wide as it asks to be, every table
+     * column at least as wide as its heading and its widest cell, and every tab of the one row lies inside the
+     * window.
+     */
+    static void noLabelCutOff(EddycastPanel panel, String theme, int tab) throws Exception {
+        List<String> cut = new java.util.ArrayList<>();
+        onEdt(() -> {
+            panel.results().tabs().setSelectedIndex(tab);
+            JComponent c = panel.component();
+            c.setSize(SMALL);
+            layout(c);
+            layout(c);
+            collectCut(c, cut);
+            javax.swing.JTabbedPane tabs = panel.results().tabs();
+            java.awt.Rectangle last = tabs.getBoundsAt(tabs.getTabCount() - 1);
+            if (last == null || last.getMaxX() > tabs.getWidth()) {
+                cut.add("the last tab lies outside the window: " + last + " in " + tabs.getWidth());
+            }
+        });
+        shot(panel, "1024-tab" + tab + "-" + theme, SMALL);
+        assertTrue(cut.isEmpty(), () -> "tab " + tab + ", " + theme + ": cut off at 1024 x 700: " + cut);
+    }
+
+    private static void collectCut(Component c, List<String> cut) {
+        if (!c.isVisible()) {
+            return;
+        }
+        if (c instanceof javax.swing.JLabel || c instanceof javax.swing.AbstractButton
+                || c instanceof javax.swing.JComboBox || c instanceof javax.swing.JTextField) {
+            String text = c instanceof javax.swing.JLabel l ? l.getText()
+                    : c instanceof javax.swing.AbstractButton b ? b.getText() : c.getName();
+            boolean hasText = text != null && !text.isBlank();
+            if (hasText && c.getWidth() < c.getPreferredSize().width && !(c instanceof javax.swing.JTextField)) {
+                cut.add(c.getClass().getSimpleName() + " \"" + text + "\" " + c.getWidth() + " < "
+                        + c.getPreferredSize().width);
+            }
+        }
+        java.awt.Container parent = c.getParent();
+        if (parent != null && !(parent instanceof javax.swing.JViewport) && c.getWidth() > 0
+                && (c.getX() + c.getWidth() > parent.getWidth() + 1 || c.getX() < -1)) {
+            cut.add(c.getClass().getSimpleName() + " " + c.getName() + " reaches past its container: x " + c.getX()
+                    + " + " + c.getWidth() + " > " + parent.getWidth());
+        }
+        if (c instanceof javax.swing.JTable t && t.isShowing() || c instanceof javax.swing.JTable t2
+                && t2.getParent() != null) {
+            javax.swing.JTable t = (javax.swing.JTable) c;
+            for (int col = 0; col < t.getColumnCount(); col++) {
+                int width = t.getColumnModel().getColumn(col).getWidth();
+                javax.swing.table.TableCellRenderer hr = t.getTableHeader().getDefaultRenderer();
+                Component h = hr.getTableCellRendererComponent(t, t.getColumnName(col), false, false, -1, col);
+                if (h.getPreferredSize().width > width) {
+                    cut.add(t.getName() + " heading " + t.getColumnName(col) + " " + width + " < "
+                            + h.getPreferredSize().width);
+                }
+                for (int row = 0; row < t.getRowCount(); row++) {
+                    Component cell = t.prepareRenderer(t.getCellRenderer(row, col), row, col);
+                    if (cell.getPreferredSize().width > width || cell.getPreferredSize().height > t.getRowHeight(row)) {
+                        cut.add(t.getName() + " cell " + t.getValueAt(row, col) + " " + width + "x"
+                                + t.getRowHeight(row) + " < " + cell.getPreferredSize());
+                    }
+                }
+            }
+        }
+        if (c instanceof Container k) {
+            for (Component child : k.getComponents()) {
+                collectCut(child, cut);
+            }
+        }
     }
 
     private static void setTheme(String theme) {
@@ -157,6 +280,90 @@ class PanelRunTest {
         } else {
             FlatLightLaf.setup();
         }
+    }
+
+    @Test
+    void twoBadFieldsShowBothMessagesInTheFormsOwnWords() throws Exception {
+        EddycastPanel[] holder = new EddycastPanel[1];
+        onEdt(() -> {
+            holder[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test6")));
+            holder[0].showScenario(ScenarioReader.parse(org.eddycast.sheet.ForecastSheetTest.CHANNEL), tmp,
+                    "channel.json");
+            holder[0].form().setValue("flow.depth", "-1.2");
+            holder[0].form().setValue("flow.width", "six");
+        });
+        java.util.Map<String, String> shown = callEdt(() -> holder[0].form().shownProblems());
+        assertEquals(java.util.Set.of("flow.depth", "flow.width"), shown.keySet(), shown.toString());
+        assertTrue(shown.get("flow.depth").startsWith("\u201cDepth h\u201d must be"), shown.toString());
+        assertTrue(shown.get("flow.width").startsWith("\u201cWidth W\u201d: \"six\" is not a number"), shown.toString());
+        for (String m : shown.values()) {
+            assertFalse(m.contains("flow.") || m.contains("channel."), "no internal key: " + m);
+        }
+        onEdt(() -> holder[0].runAction().actionPerformed(null));
+        assertFalse(callEdt(holder[0]::isRunning));
+        // the long message wraps inside the form: the form is no wider at 1024 x 700 than the room it has
+        noLabelCutOff(holder[0], "light", ResultsView.CURVES_TAB);
+        shot(holder[0], "form-two-errors-light", SMALL);
+        EddycastPanel[] dark = new EddycastPanel[1];
+        onEdt(() -> {
+            setTheme("dark");
+            dark[0] = new EddycastPanel(new TestHost(), new TestDialogs(),
+                    new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test6")));
+            dark[0].showScenario(ScenarioReader.parse(org.eddycast.sheet.ForecastSheetTest.CHANNEL), tmp,
+                    "channel.json");
+            dark[0].form().setValue("flow.depth", "-1.2");
+            dark[0].form().setValue("flow.width", "six");
+        });
+        shot(dark[0], "form-two-errors-dark", SMALL);
+        onEdt(() -> setTheme("light"));
+        Preferences.userRoot().node("org/eddycast/ui-test6").removeNode();
+    }
+
+    @Test
+    void dialogsStartInPresetsThenTheLastFolderAndBrowseFillsTheRecordPath() throws Exception {
+        Preferences node = Preferences.userRoot().node("org/eddycast/ui-test8");
+        TestHost host = new TestHost();
+        EddycastPanel[] holder = new EddycastPanel[1];
+        onEdt(() -> holder[0] = new EddycastPanel(host, new TestDialogs(), new UiPreferences(node)));
+        EddycastPanel panel = holder[0];
+        // the tests run in the project folder, which holds the bundled presets
+        assertEquals(Path.of("presets").toAbsolutePath(), callEdt(panel::startFolder));
+        Path scenario = tmp.resolve("tiny.json");
+        Files.writeString(scenario, TINY);
+        assertTrue(callEdt(() -> panel.open(scenario)));
+        assertEquals(tmp.toAbsolutePath(), callEdt(panel::startFolder), "then the folder used last");
+        assertEquals(tmp.toAbsolutePath().resolve("tiny-test-flow-summary.pdf"),
+                callEdt(() -> panel.suggestedFile("-summary.pdf")), "a name made from the scenario's name");
+        // Browse on the record field: a file under the scenario's folder is written relative to it
+        Path record = Files.createDirectories(tmp.resolve("records")).resolve("probe.csv");
+        Files.writeString(record, "t,u\n0,0\n");
+        host.toOpen = record;
+        onEdt(() -> {
+            panel.form().setRoute("measured");
+            javax.swing.JButton browse = findNamed(panel.form(), "browse:flow.record", javax.swing.JButton.class);
+            browse.doClick();
+        });
+        assertEquals("records/probe.csv", callEdt(() -> panel.form().value("flow.record")));
+        assertEquals(tmp.toAbsolutePath(), host.startedIn, "Browse starts in the scenario's folder");
+        node.removeNode();
+    }
+
+    @Test
+    void aFileWithABadValueOpensWithThatFieldMarked() throws Exception {
+        Path file = tmp.resolve("bad-length.json");
+        Files.writeString(file, TINY.replace("\"integralLength\": 0.25", "\"integralLength\": -2"));
+        TestDialogs dialogs = new TestDialogs();
+        EddycastPanel[] holder = new EddycastPanel[1];
+        onEdt(() -> holder[0] = new EddycastPanel(new TestHost(), dialogs,
+                new UiPreferences(Preferences.userRoot().node("org/eddycast/ui-test7"))));
+        assertTrue(callEdt(() -> holder[0].open(file)), dialogs.told.toString());
+        assertEquals("-2", callEdt(() -> holder[0].form().value("flow.integralLength")));
+        assertEquals("0.04", callEdt(() -> holder[0].form().value("flow.rmsVelocity")), "the rest is loaded");
+        java.util.Map<String, String> shown = callEdt(() -> holder[0].form().shownProblems());
+        assertEquals(java.util.Set.of("flow.integralLength"), shown.keySet(), shown.toString());
+        assertTrue(dialogs.told.isEmpty(), dialogs.told.toString());
+        Preferences.userRoot().node("org/eddycast/ui-test7").removeNode();
     }
 
     @Test
@@ -254,6 +461,24 @@ class PanelRunTest {
         assertTrue(Math.abs(Double.parseDouble(rows.get(0).get(3))) < 3, rows.get(0).toString());
         assertTrue(rows.get(0).get(4).contains("more than 3%"), rows.get(0).toString());
         assertTrue(callEdt(holder[0]::statusText).startsWith("All 1 cases run"));
+        boolean[] closed = new boolean[1];
+        onEdt(() -> {
+            holder[0].setCloser(() -> closed[0] = true);
+            findNamed(holder[0], "close", javax.swing.JButton.class).doClick();
+            holder[0].setSize(holder[0].getPreferredSize());
+            layout(holder[0]);
+            BufferedImage img = new BufferedImage(holder[0].getWidth(), holder[0].getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            Graphics2D g = img.createGraphics();
+            holder[0].printAll(g);
+            g.dispose();
+            try {
+                ImageIO.write(img, "png", Path.of("target", "screenshots", "self-check-light.png").toFile());
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
+        assertTrue(closed[0], "Close closes the self-check");
     }
 
     @ParameterizedTest
@@ -278,7 +503,7 @@ class PanelRunTest {
             Thread.sleep(20);
         }
         shot(panel, "running", theme);
-        assertEquals(ResultsView.SPREAD_TAB, (int) callEdt(() -> panel.results().tabs().getSelectedIndex()),
+        assertEquals(ResultsView.QUALITY_TAB, (int) callEdt(() -> panel.results().tabs().getSelectedIndex()),
                 "while running, the curves that fill in are shown");
         onEdt(() -> panel.cancelAction().actionPerformed(null));
         assertFalse(callEdt(panel::isRunning));
@@ -330,11 +555,17 @@ class PanelRunTest {
 
     /** Renders the panel at 1280 x 820 into target/screenshots/panel-NAME.png. */
     static void shot(EddycastPanel panel, String name) throws Exception {
+        shot(panel, name, new Dimension(1280, 820));
+    }
+
+    /** Renders the panel at a size into target/screenshots/panel-NAME.png. */
+    static void shot(EddycastPanel panel, String name, Dimension size) throws Exception {
         onEdt(() -> {
             JComponent c = panel.component();
-            c.setSize(new Dimension(1280, 820));
+            c.setSize(size);
             layout(c);
-            BufferedImage img = new BufferedImage(1280, 820, BufferedImage.TYPE_INT_RGB);
+            layout(c);
+            BufferedImage img = new BufferedImage(size.width, size.height, BufferedImage.TYPE_INT_RGB);
             Graphics2D g = img.createGraphics();
             c.printAll(g);
             g.dispose();
@@ -346,6 +577,31 @@ class PanelRunTest {
                 throw new java.io.UncheckedIOException(e);
             }
         });
+    }
+
+    /** The first showing component of a type in a tree (depth first). */
+    static <T> T find(Component c, Class<T> type) {
+        return first(c, type, x -> x.isVisible());
+    }
+
+    /** The first component of a type with a name in a tree (depth first). */
+    static <T> T findNamed(Component c, String name, Class<T> type) {
+        return first(c, type, x -> name.equals(x.getName()));
+    }
+
+    private static <T> T first(Component c, Class<T> type, java.util.function.Predicate<Component> test) {
+        if (type.isInstance(c) && test.test(c)) {
+            return type.cast(c);
+        }
+        if (c instanceof Container k) {
+            for (Component child : k.getComponents()) {
+                T t = first(child, type, test);
+                if (t != null) {
+                    return t;
+                }
+            }
+        }
+        return null;
     }
 
     private static void layout(Component c) {
@@ -409,6 +665,13 @@ class PanelRunTest {
     }
 
     static final class TestHost implements HostContext {
+        final List<Action> contributed = new CopyOnWriteArrayList<>();
+
+        /** A contributed action by its name. */
+        Action action(String name) {
+            return contributed.stream().filter(a -> name.equals(a.getValue(Action.NAME))).findFirst().orElseThrow();
+        }
+
         @Override
         public void showStatus(String text) {
         }
@@ -417,9 +680,19 @@ class PanelRunTest {
         public void documentChanged(String documentName, boolean modified) {
         }
 
+        /** What the open dialog answers, and the folder it was asked to start in. */
+        Path toOpen;
+        Path startedIn;
+
         @Override
         public Optional<Path> chooseFileToOpen(String title, String extension) {
-            return Optional.empty();
+            return Optional.ofNullable(toOpen);
+        }
+
+        @Override
+        public Optional<Path> chooseFileToOpen(String title, String extension, Path startFolder) {
+            startedIn = startFolder;
+            return Optional.ofNullable(toOpen);
         }
 
         @Override
@@ -429,6 +702,7 @@ class PanelRunTest {
 
         @Override
         public void contributeMenu(String title, List<Action> actions) {
+            actions.stream().filter(a -> a != null).forEach(contributed::add);
         }
 
         @Override
