@@ -46,20 +46,25 @@ class DiffusivityAnalysisTest {
     }
 
     /**
-     * 20 blocks, late slope 1 in every block, early slope 1 - delta -+ s alternately: the change late minus
-     * early is delta + s z_b with z_b = +-1, whose standard error is s sqrt(20/19) / sqrt(20) = s / sqrt(19).
-     * So the change is delta sqrt(19) / s standard errors.
+     * 20 blocks, late slope `level` in every block, early slope level - delta -+ s alternately: the change late
+     * minus early is delta + s z_b with z_b = +-1, whose standard error is s sqrt(20/19) / sqrt(20) = s / sqrt(19).
+     * So the change is delta sqrt(19) / s standard errors, and 100 delta / level per cent.
      */
-    private static DisplacementMoments drifting(double delta, double errorsOfChange) {
+    private static double[][] drift(double level, double delta, double errorsOfChange) {
         int n = 20;
         double s = delta * Math.sqrt(19) / errorsOfChange;
         double[] early = new double[n];
         double[] late = new double[n];
         for (int b = 0; b < n; b++) {
-            late[b] = 1;
-            early[b] = 1 - delta - s * (b % 2 == 0 ? 1 : -1);
+            late[b] = level;
+            early[b] = level - delta - s * (b % 2 == 0 ? 1 : -1);
         }
-        return moments(new double[][] {early}, new double[][] {late});
+        return new double[][] {early, late};
+    }
+
+    private static DisplacementMoments drifting(double delta, double errorsOfChange) {
+        double[][] d = drift(1, delta, errorsOfChange);
+        return moments(new double[][] {d[0]}, new double[][] {d[1]});
     }
 
     private static DiffusivityAnalysis analyse(DisplacementMoments m, double variance, double timeUnit) {
@@ -124,14 +129,42 @@ class DiffusivityAnalysisTest {
                 above.warnings());
     }
 
+    /** At a level of 2 (not 1), so that 1% of the level and the percentage's divisor are both exercised. */
     @Test
     void notSettledWarningAtOnePerCent() {
-        DiffusivityAnalysis below = analyse(drifting(0.0099, 10), 2.0, 1.0);
-        assertTrue(below.axes().get(0).settled(), "a change of 0.99%, ten standard errors");
-        DiffusivityAnalysis above = analyse(drifting(0.0101, 10), 2.0, 1.0);
-        assertFalse(above.axes().get(0).settled(), "a change of 1.01%, ten standard errors");
-        assertEquals(1, above.warnings().size());
-        assertTrue(above.warnings().get(0).contains("(a change of 1.0%"), above.warnings().get(0));
+        double[][] below = drift(2, 0.0198, 10);
+        DiffusivityAnalysis settled = analyse(moments(new double[][] {below[0]}, new double[][] {below[1]}), 4, 1);
+        assertTrue(settled.axes().get(0).settled(), "a change of 0.99%, ten standard errors");
+        double[][] above = drift(2, 0.0202, 10);
+        DiffusivityAnalysis drifting = analyse(moments(new double[][] {above[0]}, new double[][] {above[1]}), 4, 1);
+        assertFalse(drifting.axes().get(0).settled(), "a change of 1.01%, ten standard errors");
+        assertEquals(List.of("the x estimate has not settled: over the earlier window [T/4, T/2] it was 1.980, "
+                + "over [T/2, T] 2.000 (a change of 1.0%, beyond three standard errors). Run at least 20.00 s."),
+                drifting.warnings());
+    }
+
+    /** The warning names the axis that drifts. */
+    @Test
+    void notSettledWarningNamesTheAxis() {
+        double[] flat = steadyRow();
+        double[][] d = drift(1, 0.05, 5);
+        DiffusivityAnalysis y = analyse(moments(new double[][] {flat, d[0], flat}, new double[][] {flat, d[1], flat}),
+                2, 1);
+        assertEquals(1, y.warnings().size(), y.warnings().toString());
+        assertTrue(y.warnings().get(0).startsWith("the y estimate has not settled"), y.warnings().get(0));
+        assertTrue(y.axes().get(0).settled() && !y.axes().get(1).settled() && y.axes().get(2).settled());
+        DiffusivityAnalysis z = analyse(moments(new double[][] {flat, flat, d[0]}, new double[][] {flat, flat, d[1]}),
+                2, 1);
+        assertTrue(z.warnings().get(0).startsWith("the z estimate has not settled"), z.warnings().get(0));
+        assertEquals("z", z.axes().get(2).axisName());
+    }
+
+    private static double[] steadyRow() {
+        double[] v = new double[20];
+        for (int b = 0; b < 20; b++) {
+            v[b] = 1 + 0.01 * (b % 2 == 0 ? 1 : -1);
+        }
+        return v;
     }
 
     /** With T_L = 1.5 the advice 20 T_L = 30 s exceeds 2 T = 20 s (and the run is short as well). */

@@ -117,6 +117,29 @@ class LateWindowSlopeEstimatorTest {
      * A curve with slope 2 D1 on [T/4, T/2] and 2 D2 on [T/2, T]: the difference of the two window estimates is
      * D2 - D1 exactly, and its standard error is that of the per-block differences (paired, not independent).
      */
+    /** Two blocks are the fewest with a standard error and an interval (one degree of freedom: t = 12.706). */
+    @Test
+    void twoBlocksGiveAnInterval() {
+        DisplacementMoments two = linear(new double[] {1.0, 1.2}, new double[] {0, 0});
+        assertEquals(0.005, two.covariance(0, 0, 0), 1e-15, "4 t^2 Var(D) = 4 (1/16) 0.02 at t = 0.25");
+        SlopeEstimate e = LateWindowSlopeEstimator.estimate(two, 0, 5, 10);
+        assertEquals(0.1, e.standardError(), 1e-12, "sd 0.1414 over sqrt(2)");
+        assertEquals(12.706, (e.high() - e.value()) / e.standardError(), 5e-4, "t(0.975; 1)");
+    }
+
+    /**
+     * Record times are step counts times the step, so a window end may miss a record time by rounding; a
+     * record within 1e-12 of the window's end (relative) counts as inside.
+     */
+    @Test
+    void recordsARoundingErrorOutsideTheWindowCountAsInside() {
+        DisplacementMoments m = new DisplacementMoments(1, new double[] {1, 2, 3, 4}, 64);
+        double[] w = LateWindowSlopeEstimator.slopeWeights(m, 2 + 2e-12, 4 - 2e-12);
+        assertEquals(-1.0, w[1] / w[3], 1e-9, "records 2 and 4 both inside, weights -1/2 and 1/2 over sxx");
+        assertEquals(0.0, w[2], 1e-9, "the middle record of three has weight zero");
+        assertEquals(0.0, w[0], 0.0);
+    }
+
     @Test
     void differenceOfWindowsIsPairedBlockByBlock() {
         double[] t = times();
@@ -154,9 +177,12 @@ class LateWindowSlopeEstimatorTest {
         assertTrue(Double.isNaN(single.standardError()) && Double.isNaN(single.low())
                 && Double.isNaN(single.high()), "one block: no standard error, no interval");
         assertEquals(0, single.degreesOfFreedom());
-        SlopeEstimate scaled = LateWindowSlopeEstimator.estimate(m, 0, 5, 10).scaled(3, 2);
+        SlopeEstimate unscaled = LateWindowSlopeEstimator.estimate(m, 0, 5, 10);
+        SlopeEstimate scaled = unscaled.scaled(3, 2);
         assertEquals(3 * mean(D10), scaled.value(), 1e-12);
         assertEquals(3 * standardError(D10), scaled.standardError(), 1e-12);
+        assertEquals(3 * unscaled.low(), scaled.low(), 1e-12);
+        assertEquals(3 * unscaled.high(), scaled.high(), 1e-12);
         assertEquals(10, scaled.windowStart(), 0.0);
         assertEquals(20, scaled.windowEnd(), 0.0);
     }
