@@ -18,6 +18,8 @@ class AmplitudeUpdateTest {
     private static final int MODES = 8;
     private static final int WIDTH = 64;
     private static final double DT = 0.02;
+    /** Not 1, so that t / tau and t tau differ. */
+    private static final double TAU = 0.5;
 
     private static final int[] COEFFICIENTS = {ModeLanes.ALPHA1, ModeLanes.BETA1, ModeLanes.ALPHA2, ModeLanes.BETA2};
 
@@ -82,12 +84,12 @@ class AmplitudeUpdateTest {
         }
     }
 
-    /** A field of 64 modes, two polarizations, stationary standard deviations 0.5 to 1.5, tau = 1. */
+    /** A field of 64 modes, two polarizations, stationary standard deviations 0.5 to 1.5, tau = 0.5. */
     private static ShearModeField knownField(double[] sigma) {
         ShearModeField f = new ShearModeField(3, sigma.length);
         for (int m = 0; m < sigma.length; m++) {
             sigma[m] = 0.5 + m / (double) sigma.length;
-            f.setMode(m, new double[] {0, 0, 1 + m}, new double[] {1, 0, 0}, new double[] {0, 1, 0}, sigma[m], 1.0);
+            f.setMode(m, new double[] {0, 0, 1 + m}, new double[] {1, 0, 0}, new double[] {0, 1, 0}, sigma[m], TAU);
         }
         return f;
     }
@@ -95,9 +97,10 @@ class AmplitudeUpdateTest {
     /**
      * From stationary draws, 160 realizations of 64 modes x 4 coefficients (N = 40,960 independent paths),
      * each coefficient standardised by its sigma: at t = 0 and t = 5 tau the mean square is 1 (stationary
-     * variance), and at lag t = tau the mean product z(0) z(t) is exp(-1) = 0.3679. Each tolerance is four
-     * standard errors of the estimate, from the sample's own spread (about 0.007 for the variances, 0.005 for
-     * the correlation). A decay rate 10% off moves the correlation by 0.035 and the variance at 5 tau by 0.09.
+     * variance), and at lag t = tau (25 steps of 0.02, tau = 0.5) the mean product z(0) z(t) is
+     * exp(-1) = 0.3679. Each tolerance is four standard errors of the estimate, from the sample's own spread
+     * (about 0.007 for the variances, 0.005 for the correlation). A decay rate 10% off moves the correlation by
+     * 0.035 and the variance at 5 tau by 0.09.
      */
     @Test
     void stationaryVarianceAndLagCorrelationOfTheProcess() {
@@ -107,8 +110,8 @@ class AmplitudeUpdateTest {
             ShearModeField f = knownField(sigma);
             var rng = RandomGeneratorFactory.of("L64X128MixRandom").create(43);
             SplittableRandom random = new SplittableRandom(44);
-            int lag = 50;
-            int longLag = 250;
+            int lag = (int) Math.round(TAU / DT);
+            int longLag = 5 * lag;
             double[] normals = new double[4 * modes];
             Moments start = new Moments();
             Moments correlation = new Moments();
@@ -140,7 +143,7 @@ class AmplitudeUpdateTest {
             assertEquals(40960, correlation.n);
             assertEquals(1.0, start.mean(), 4 * start.standardError(), k + ": stationary draw, variance");
             assertEquals(1.0, late.mean(), 4 * late.standardError(), k + ": variance after 5 tau");
-            assertEquals(Math.exp(-lag * DT), correlation.mean(), 4 * correlation.standardError(),
+            assertEquals(Math.exp(-lag * DT / TAU), correlation.mean(), 4 * correlation.standardError(),
                     k + ": correlation at lag tau");
             assertTrue(correlation.standardError() < 0.006, "the check is as tight as planned");
         }

@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
  */
 class BeltramiFlowTest {
 
-    private static final double A = 1.0;
+    private static final double A = 1.3;
     private static final double B = 0.7;
     private static final double C = 0.4;
 
@@ -49,7 +49,7 @@ class BeltramiFlowTest {
 
     /**
      * Curl u = u and div u = 0 by central differences of step h = 1e-4: the truncation error h^2 |u'''| / 6 is
-     * below 1e-8 for amplitudes of order one; 1e-7 leaves room for rounding (1e-16 / h).
+     * below 1e-8 for amplitudes of order one; 2e-7 leaves room for rounding (1e-16 / h).
      */
     @Test
     void curlEqualsVelocityAndDivergenceVanishes() {
@@ -76,9 +76,9 @@ class BeltramiFlowTest {
             f.velocityAt(p, u);
             double[] curl = {grad[2][1] - grad[1][2], grad[0][2] - grad[2][0], grad[1][0] - grad[0][1]};
             for (int a = 0; a < 3; a++) {
-                assertEquals(u[a], curl[a], 1e-7, "curl component " + a + " at point " + i);
+                assertEquals(u[a], curl[a], 2e-7, "curl component " + a + " at point " + i);
             }
-            assertEquals(0.0, grad[0][0] + grad[1][1] + grad[2][2], 1e-7, "divergence at point " + i);
+            assertEquals(0.0, grad[0][0] + grad[1][1] + grad[2][2], 2e-7, "divergence at point " + i);
         }
     }
 
