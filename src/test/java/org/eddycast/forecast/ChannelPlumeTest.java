@@ -15,7 +15,7 @@ class ChannelPlumeTest {
 
     private static final double Q = 0.2;
     private static final double U = 0.5;
-    private static final double H = 2.0;
+    private static final double H = 2.5;
     private static final double W = 25.0;
     private static final double EPS_T = 0.03;
     private static final double EPS_Z = 0.006;
