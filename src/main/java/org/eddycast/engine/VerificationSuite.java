@@ -56,13 +56,14 @@ public final class VerificationSuite {
                 biasBound(uniform, d0, dt, 40, 1.0), "discrete-time correlation sum a^2/12 (a = dt/tau) plus "
                         + "the late-window tail exp(-T/(2 T_L))",
                 d0, Integrator.STRANG, dt, 800, 1, 131072));
-        // Cellular flow psi = sin x sin y at D0 = 0.01 (Peclet 100): D / sqrt(D0) = 1.0692 from the cell problem.
+        // Cellular flow psi = sin x sin y at D0 = 0.01 (Peclet 100): D / sqrt(D0) = 1.0693 from the cell problem
+        // (its Fourier-Galerkin solve is the test CellularConstantTest).
         CellularFlow cells = new CellularFlow(2);
         for (int axis = 0; axis < 2; axis++) {
             list.add(new VerificationCase("cellular flow at Peclet 100, D_" + (axis == 0 ? "xx" : "yy"),
-                    "cell-problem value 1.0692 sqrt(D0) (derived; large-Peclet law of Shraiman 1987, Phys. Rev. A "
+                    "cell-problem value 1.0693 sqrt(D0) (derived; large-Peclet law of Shraiman 1987, Phys. Rev. A "
                             + "36:261, and Rosenbluth et al. 1987, Phys. Fluids 30:2636)",
-                    cells, axis, 1.0692 * Math.sqrt(0.01), 0.005 * 1.0692 * Math.sqrt(0.01),
+                    cells, axis, 1.0693 * Math.sqrt(0.01), 0.005 * 1.0693 * Math.sqrt(0.01),
                     "Strang at dt = 0.1: no bias beyond three standard errors (about 7%) even at dt = 0.4 "
                             + "(CellularTimeStepBiasTest); second order scales that by (0.1/0.4)^2 to below 0.5%",
                     0.01, Integrator.STRANG, 0.1, 2000, 64, 262144));

@@ -13,20 +13,22 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The time-step bias of the effective diffusivity on the cellular flow psi = sin x sin y at D0 = 0.01 (Peclet
- * 100), against the cell-problem value D = 1.0692 sqrt(D0) (derived; after Shraiman 1987, Phys. Rev. A
+ * 100), against the cell-problem value D = 1.0693 sqrt(D0) (derived in field.CellularConstantTest; after Shraiman 1987, Phys. Rev. A
  * 36:261, and Rosenbluth et al. 1987, Phys. Fluids 30:2636).
  *
  * <p>Euler-Maruyama does not preserve area: each step pushes a particle outward across the streamlines by
  * O(dt^2), an outward drift of O(dt) per unit time, so the diffusivity comes out far too large, with a bias that
  * grows with the step. How the diffusivity responds to that drift is not linear (the drift feeds the boundary
  * layers between cells), so the observed order of the bias is measured and stated, not assumed: about 0.7 to
- * 1 over steps 0.025 to 0.1 (the strong order of the scheme itself, 1, is checked in IntegratorTest). The volume-preserving
- * splittings show no bias beyond three standard errors at a step four times the one the verification case
- * uses. Fixed seed; each estimate's standard error is its own (over independent blocks).
+ * 1 over steps 0.025 to 0.1 (the strong order of the scheme itself, 1, is checked in IntegratorTest). The
+ * volume-preserving splittings show no bias beyond three standard errors at a step four times the one the
+ * verification case uses; with 131,072 particles a standard error is 0.8% of the value, so three of them are
+ * 2.5% (measured: Lie +0.2%, Strang +1.3%). Fixed seed; each estimate's standard error is its own (over
+ * independent blocks).
  */
 class CellularTimeStepBiasTest {
 
-    private static final double EXPECTED = 1.0692 * Math.sqrt(0.01);
+    private static final double EXPECTED = 1.0693 * Math.sqrt(0.01);
 
     private static SlopeEstimate diffusivity(Integrator integrator, double dt, int particles) {
         double duration = 200;
@@ -58,7 +60,7 @@ class CellularTimeStepBiasTest {
     @Test
     void splittingsShowNoBiasAtFourTimesTheCheckedStep() {
         for (Integrator integrator : new Integrator[] {Integrator.LIE, Integrator.STRANG}) {
-            SlopeEstimate e = diffusivity(integrator, 0.4, 16384);
+            SlopeEstimate e = diffusivity(integrator, 0.4, 131072);
             assertEquals(EXPECTED, e.value(), 3 * e.standardError(), integrator + " at dt = 0.4");
         }
     }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import java.util.Map;
 
 import org.eddycast.scenario.ChannelDesign;
@@ -87,6 +88,49 @@ class ChannelRulesTest {
         assertEquals(2, model.warnings().size(), model.warnings().toString());
         assertTrue(ChannelRules.STANDARD.model(ChannelDesign.withBedSlope(1.0, 30.0, 0.5, 1e-4)).warnings()
                 .isEmpty());
+    }
+
+    private static List<String> warningsAbout(ChannelDesign design, String subject) {
+        return ChannelRules.STANDARD.model(design).warnings().stream().filter(w -> w.contains(subject)).toList();
+    }
+
+    /**
+     * Each warning just below and just above its threshold (1% either side), with its text: Froude number
+     * U / sqrt(g h) above 0.8 (common practice), W/h below 5 (Fischer et al. 1979, Mixing in Inland and Coastal
+     * Waters, ch. 5, from memory), Reynolds number U R / nu below 2000 (Chow 1959, Open-Channel Hydraulics,
+     * from memory).
+     */
+    @Test
+    void froudeWarningEitherSideOfItsThreshold() {
+        double critical = 0.8 * Math.sqrt(G * 1.0);
+        assertEquals(List.of(), warningsAbout(ChannelDesign.withShearVelocity(1.0, 30.0, 0.99 * critical, 0.05),
+                "Froude"), "Fr = 0.792");
+        assertEquals(List.of(String.format("the Froude number %.3g is high (above 0.8): near or past critical flow,"
+                        + " surface waves and jumps make the uniform-flow rules doubtful", 0.808)),
+                warningsAbout(ChannelDesign.withShearVelocity(1.0, 30.0, 1.01 * critical, 0.05), "Froude"),
+                "Fr = 0.808");
+    }
+
+    @Test
+    void narrowChannelWarningEitherSideOfItsThreshold() {
+        assertEquals(List.of(), warningsAbout(ChannelDesign.withShearVelocity(1.0, 5.05, 0.5, 0.05), "not wide"));
+        assertEquals(List.of(String.format("the channel is not wide (W/h = %.3g, below 5): side walls and"
+                        + " secondary currents shape the flow, and the wide-channel rules are doubtful", 4.95)),
+                warningsAbout(ChannelDesign.withShearVelocity(1.0, 4.95, 0.5, 0.05), "not wide"));
+    }
+
+    @Test
+    void reynoldsWarningEitherSideOfItsThreshold() {
+        double h = 0.01;
+        double w = 1.0;
+        double r = w * h / (w + 2 * h);
+        double atThreshold = 2000 * 1.0034e-6 / r;
+        assertEquals(List.of(), warningsAbout(ChannelDesign.withShearVelocity(h, w, 1.01 * atThreshold, 0.001),
+                "Reynolds"), "Re = 2020");
+        assertEquals(List.of(String.format("the Reynolds number U R / nu = %.3g is below 2000: the flow may not be"
+                        + " turbulent", 1980.0)),
+                warningsAbout(ChannelDesign.withShearVelocity(h, w, 0.99 * atThreshold, 0.001), "Reynolds"),
+                "Re = 1980");
     }
 
     @Test

@@ -1,6 +1,6 @@
 package org.eddycast.sheet;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -49,10 +49,13 @@ class SummarySheetPdfTest {
                     + SummaryContent.number(a.diffusivity().high()) + "]"), "interval of " + a.axisName());
         }
         assertTrue(text.contains("m\u00b2/s"), "diffusivity unit");
-        assertTrue(text.contains("0.04 m/s") || text.contains("0.04 m/s".replace(" ", "")) || text.contains("0.04"));
+        // The given rms velocity in its own row, with its unit (not merely any "0.04" on the page).
+        assertTrue(text.contains("rms velocity u' 0.04 m/s"), "input row of u'");
+        assertTrue(text.contains("integral length L 0.25 m"), "input row of L");
         String firstCaution = Cautions.ALL.get(0).substring(0, 40);
         assertTrue(text.contains(firstCaution), "first caution");
         assertTrue(text.contains("Taylor, G. I. (1921)"), "method reference");
-        assertEquals(r.toolVersion(), r.toolVersion());
+        assertFalse(r.toolVersion().isBlank(), "a version to print");
+        assertTrue(text.contains("eddycast " + r.toolVersion() + " \u2014 Tiny sheet flow"), "version in the footer");
     }
 }
