@@ -60,7 +60,7 @@ class ExportsTest {
                 return null;
             }
         };
-        SwingUtilities.invokeAndWait(() -> new Exports(host, dialogs, () -> result, new ResultsView()).curvesCsv()
+        SwingUtilities.invokeAndWait(() -> new Exports(host, dialogs, () -> result, new ResultsView(), name -> tmp.resolve(name)).curvesCsv()
                 .actionPerformed(null));
         assertTrue(dialogs.told.stream().anyMatch(t -> t.startsWith("Not written: ") && t.contains("velocity record")),
                 dialogs.told.toString());
