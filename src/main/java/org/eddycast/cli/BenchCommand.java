@@ -71,9 +71,9 @@ final class BenchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        if (answer && json != null) {
-            throw new IllegalArgumentException("--json applies to the throughput figures only: leave it out with "
-                    + "--answer, whose one line goes to standard output");
+        if (workloadAnswer && json != null) {
+            throw new IllegalArgumentException("--json applies to the throughput figures and to --answer's table:"
+                    + " leave it out with --workload-answer, whose one line goes to standard output");
         }
         new OutputPlan().output("--json", json).check();
         int threadCount = threads.resolve();

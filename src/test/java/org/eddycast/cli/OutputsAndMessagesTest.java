@@ -53,9 +53,12 @@ class OutputsAndMessagesTest {
         assertEquals(2, o.status());
         assertTrue(o.err().contains("does not exist"), o.err());
         assertEquals("", o.out(), "nothing was measured");
-        CommandLineTest.Outcome answer = run("bench", "--answer", "--json", dir.resolve("b.json").toString());
+        CommandLineTest.Outcome answer = run("bench", "--workload-answer", "--json", dir.resolve("b.json").toString());
         assertEquals(2, answer.status());
-        assertTrue(answer.err().contains("--json applies to the throughput figures only"), answer.err());
+        assertTrue(answer.err().contains("leave it out with --workload-answer"), answer.err());
+        CommandLineTest.Outcome table = run("bench", "--answer", "--json", dir.resolve("missing/t.json").toString());
+        assertEquals(2, table.status());
+        assertTrue(table.err().contains("does not exist"), table.err());
     }
 
     @Test
