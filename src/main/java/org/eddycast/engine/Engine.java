@@ -16,12 +16,16 @@ import org.eddycast.scenario.DirectFlow;
 import org.eddycast.scenario.MeasuredFlow;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TankFlow;
+import org.eddycast.transport.TransportResult;
 
 /**
  * The one entry point the panel, the command line and the report share: a scenario in, a study result out.
  * Knows nothing of any user interface.
  */
 public final class Engine {
+
+    /** The share of a staged run's progress bar that the field stage takes. */
+    static final double FIELD_SHARE = 0.3;
 
     private Engine() {
     }
@@ -105,7 +109,13 @@ public final class Engine {
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel) {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
-        DiffusivityResult r = SimulationCache.shared().run(c, threads, listener, cancel);
-        return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r), ToolVersion.get(), Instant.now());
+        boolean staged = s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow;
+        double fieldShare = staged ? FIELD_SHARE : 1.0;
+        DiffusivityResult r = SimulationCache.shared().run(c, threads,
+                (fraction, partial) -> listener.progress(fieldShare * fraction, partial), cancel);
+        TransportResult transport = TransportStudy.run(s, flow, r, threads,
+                fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
+        return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
+                Instant.now(), transport);
     }
 }
