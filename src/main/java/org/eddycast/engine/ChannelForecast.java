@@ -56,6 +56,7 @@ final class ChannelForecast {
         double[][] high = new double[3][times.length];
         double[] peak = new double[times.length];
         double[] peakFactor = t.sectionPeakFactor();
+        double[] extent = {Double.NaN, ch.width(), ch.section().maxDepth()};
         for (int j = 0; j < times.length; j++) {
             double time = times[j];
             for (int a = 0; a < 3; a++) {
@@ -68,11 +69,13 @@ final class ChannelForecast {
                     vLow = last * (1 - sampling) + 2 * kl.low() * (time - end);
                     vHigh = last * (1 + sampling) + 2 * kl.high() * (time - end);
                 }
-                width[a][j] = factor * Math.sqrt(v);
-                low[a][j] = factor * Math.sqrt(Math.max(vLow, 0));
-                high[a][j] = factor * Math.sqrt(vHigh);
+                double cap = a == 0 ? Double.POSITIVE_INFINITY : extent[a];
+                width[a][j] = Math.min(cap, factor * Math.sqrt(v));
+                low[a][j] = Math.min(cap, factor * Math.sqrt(Math.max(vLow, 0)));
+                high[a][j] = Math.min(cap, factor * Math.sqrt(vHigh));
             }
-            double sigmaX = width[0][j] / factor;
+            double sigmaX = Math.sqrt(Math.max(at(recordTimes, variance[0], Math.min(time, end))
+                    + (time > end ? 2 * kl.value() * (time - end) : 0), 1e-30));
             peak[j] = release.mass() / (t.area() * Math.sqrt(2 * Math.PI) * sigmaX)
                     * at(recordTimes, peakFactor, Math.min(time, end));
         }
@@ -117,6 +120,8 @@ final class ChannelForecast {
         assumptions.add("section: " + ch.section().kind() + ", surface width " + ForecastBuilder.fmt(w)
                 + " m, greatest depth " + ForecastBuilder.fmt(ch.section().maxDepth()) + " m, area "
                 + ForecastBuilder.fmt(ch.section().area()) + " m^2");
+        assumptions.add("widths across and over the depth come from the particles and stop at the section's"
+                + " width and depth: a cloud mixed across fills the section");
         assumptions.add("distance downstream x = U t with U = " + ForecastBuilder.fmt(u) + " m/s, the section mean");
         assumptions.add("peak concentration: the cross-section mean at the cloud's centre, M / (A sqrt(2 pi)"
                 + " sigma_x), times the largest-to-mean ratio over " + "the section's cells counted from the"

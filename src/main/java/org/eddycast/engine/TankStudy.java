@@ -22,18 +22,22 @@ final class TankStudy {
     private TankStudy() {
     }
 
-    /** The tank's transport model for a design and field factor F. */
+    /**
+     * The tank's transport model for a design and field factor F, in the tank's own units: lengths in tank
+     * diameters T and times in impeller revolutions 1/N. Two tanks of the same shape, impeller and
+     * molecular diffusivity in those units give the same numbers, so N theta follows 1/N exactly.
+     */
     static TankTransport model(TankDesign tank, double fieldFactor, double molecular) {
         double po = TankRules.powerNumber(tank).value();
         double nq = TankFlowRules.pumpingNumber(tank).value();
-        double d = tank.impellerDiameter();
+        double t = tank.tankDiameter();
+        double d = tank.impellerDiameter() / t;
         double n = tank.impellerSpeed();
-        return new TankTransport(tank.tankDiameter(), tank.liquidHeight(), d, tank.impellerClearance(),
-                TankFlowRules.radialFlow(tank), TankFlowRules.discharge(tank, nq),
-                TankRules.meanDissipation(tank, po) * tank.volume(), TankFlowRules.IMPELLER_ZONE_SHARE,
-                TankRules.STANDARD.integralLengthOverImpellerDiameter() * d,
-                TankRules.STANDARD.dissipationConstant(), fieldFactor, molecular,
-                TankFlowRules.ZONE_SWIRL_FRACTION * 2 * Math.PI * n);
+        return new TankTransport(1, tank.liquidHeight() / t, d, tank.impellerClearance() / t,
+                TankFlowRules.radialFlow(tank), nq * d * d * d, po * Math.pow(d, 5),
+                TankFlowRules.IMPELLER_ZONE_SHARE, TankRules.STANDARD.integralLengthOverImpellerDiameter() * d,
+                TankRules.STANDARD.dissipationConstant(), fieldFactor, molecular / (n * t * t),
+                TankFlowRules.ZONE_SWIRL_FRACTION * 2 * Math.PI);
     }
 
     /**
@@ -61,11 +65,15 @@ final class TankStudy {
     static TankStageResult run(Scenario s, TankDesign tank, double[] fieldFactor, int threads,
                                DoubleConsumer progress, Cancellation cancel) {
         TankTransport model = model(tank, fieldFactor[0], s.substance().molecularDiffusivity());
-        double r = tank.tankDiameter() / 2;
-        double h = tank.liquidHeight();
+        double length = tank.tankDiameter();
+        double r = 0.5;
+        double h = tank.liquidHeight() / length;
         List<String> names = List.of("near the surface, across the axis from the feed", "mid-depth by the wall",
                 "near the bottom, half-way out");
         double[] feed = feed(s, tank);
+        for (int i = 0; i < 3; i++) {
+            feed[i] /= length;
+        }
         double angle = Math.atan2(feed[1], feed[0]) + Math.PI;
         double c = Math.cos(angle);
         double sn = Math.sin(angle);
@@ -74,9 +82,10 @@ final class TankStudy {
                 new double[] {-0.5 * r * c, -0.5 * r * sn, 0.12 * h});
         double po = TankRules.powerNumber(tank).value();
         double nq = TankFlowRules.pumpingNumber(tank).value();
-        TankStage.Request q = new TankStage.Request(model, feed, names, probes, PROBE_RADIUS * tank.tankDiameter(),
-                tank.impellerSpeed(), tank.impellerDiameter(),
-                Double.isNaN(s.forecast().horizon()) ? 0 : s.forecast().horizon(), PARTICLES, s.simulation().seed());
+        double n = tank.impellerSpeed();
+        TankStage.Request q = new TankStage.Request(model, feed, names, probes, PROBE_RADIUS,
+                tank.impellerDiameter() / length, Double.isNaN(s.forecast().horizon()) ? 0
+                : s.forecast().horizon() * n, PARTICLES, s.simulation().seed(), length, 1 / n);
         return TankStage.run(q, TankFlowRules.discharge(tank, nq), TankFlowRules.velocityGradient(tank, po),
                 threads, progress, cancel);
     }

@@ -43,6 +43,9 @@ public final class TextSummary {
         for (String w : s.flow().warnings()) {
             sb.append("  WARNING (flow): ").append(w).append('\n');
         }
+        if (s.transport() != null) {
+            TransportText.append(sb, s.transport());
+        }
         Forecast f = s.forecast();
         if (f != null) {
             sb.append(String.format(Locale.ROOT, "  forecast (%s; %s):%n", f.inDistance() ? "distance downstream"

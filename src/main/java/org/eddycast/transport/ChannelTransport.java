@@ -153,26 +153,47 @@ public final class ChannelTransport implements TransportModel {
         out[8] = w00 * dkz[o00] + w01 * dkz[o00 + 1] + w10 * dkz[o10] + w11 * dkz[o10 + 1];
     }
 
+    /**
+     * Mirrors a point that left the water back into it: at the banks across y, at the surface vertically, and at
+     * the bed along the bed's normal (for a sloping bank a vertical mirror would let particles creep along it).
+     */
     @Override
     public void reflect(double[] p) {
         double y = p[1];
-        if (y >= 0 && y <= width) {
-            double z = p[2];
-            if (z <= 0 && z >= -depthAt(y)) {
-                return;
-            }
+        double z = p[2];
+        if (y >= 0 && y <= width && z <= 0 && z >= -depthAt(y)) {
+            return;
         }
-        for (int i = 0; i < 4 && (y < 0 || y > width); i++) {
-            y = y < 0 ? -y : 2 * width - y;
+        for (int i = 0; i < 6; i++) {
+            if (y < 0) {
+                y = -y;
+            } else if (y > width) {
+                y = 2 * width - y;
+            }
+            y = Math.max(0, Math.min(width, y));
+            if (z > 0) {
+                z = -z;
+            }
+            double h = depthAt(y);
+            if (z >= -h) {
+                break;
+            }
+            double slope = uniform ? 0 : depthSlopeAt(y);
+            double norm2 = 1 + slope * slope;
+            double below = (z + h) / norm2;
+            y -= 2 * below * slope;
+            z -= 2 * below;
         }
         y = Math.max(0, Math.min(width, y));
-        double h = depthAt(y);
-        double z = p[2];
-        for (int i = 0; i < 4 && (z > 0 || z < -h); i++) {
-            z = z > 0 ? -z : -2 * h - z;
-        }
         p[1] = y;
-        p[2] = Math.max(-h, Math.min(0, z));
+        p[2] = Math.max(-depthAt(y), Math.min(0, z));
+    }
+
+    /** dh/dy at y from the depth table. */
+    private double depthSlopeAt(double y) {
+        double t = Math.max(0, Math.min(DEPTH_POINTS - 1, y * depthIndexPerMetre));
+        int i = Math.min((int) t, DEPTH_POINTS - 2);
+        return (depthTable[i + 1] - depthTable[i]) * depthIndexPerMetre;
     }
 
     @Override

@@ -8,7 +8,11 @@ import org.eddycast.particles.Cancellation;
 
 /**
  * The transport stage for a stirred tank: releases a dose at the feed point, follows it round the circulation
- * loops until it is blended, and reads off the blend times over the tank's cells and at virtual probes.
+ * loops until it is blended, and reads off the blend times over the tank's cells and at virtual probes. The
+ * model works in the tank's own units (its diameter and one impeller revolution: {@link Request}); the result
+ * is in metres and seconds. The time step is a twentieth of a revolution, smaller where the impeller zone's
+ * diffusivity would carry a particle more than a twentieth of the impeller diameter in one step; the run lasts
+ * twenty loop circulation times, or longer where diffusion across the tank is slower.
  */
 public final class TankStage {
 
@@ -28,16 +32,17 @@ public final class TankStage {
      * @param model        the tank
      * @param feed         the feed point (x, y from the axis, z from the bottom; m)
      * @param probes       names and points of the virtual probes
-     * @param probeRadius  the probes' radius (m)
-     * @param impellerSpeed N (rev/s)
-     * @param impellerDiameter D (m)
-     * @param minDuration  simulate at least this long (s)
+     * @param probeRadius  the probes' radius
+     * @param impellerDiameter D
+     * @param minDuration  simulate at least this long
      * @param particles    particles to follow
      * @param seed         the seed
+     * @param lengthScale  metres per unit of the model's lengths (the tank diameter)
+     * @param timeScale    seconds per unit of the model's times (one impeller revolution)
      */
     public record Request(TankTransport model, double[] feed, List<String> probeNames, List<double[]> probes,
-                          double probeRadius, double impellerSpeed, double impellerDiameter, double minDuration,
-                          int particles, long seed) {
+                          double probeRadius, double impellerDiameter, double minDuration, int particles, long seed,
+                          double lengthScale, double timeScale) {
     }
 
     /** Runs the stage; the circulation time, G and the discharge are filled in by the caller's rules. */
@@ -48,9 +53,8 @@ public final class TankStage {
         double volume = Math.PI * model.radius() * model.radius() * model.height();
         double loopTime = volume / model.loopFlow();
         double mixingTime = model.radius() * model.radius() / model.meanDiffusivity();
-        double duration = Math.max(Math.max(60 * loopTime, 0.3 * mixingTime), q.minDuration());
-        double n = q.impellerSpeed();
-        double dt = 0.05 / n;
+        double duration = Math.max(Math.max(20 * loopTime, 0.1 * mixingTime), q.minDuration());
+        double dt = 0.05;
         double kMax = model.maxDiffusivity();
         dt = Math.min(dt, Math.pow(0.05 * q.impellerDiameter(), 2) / (2 * kMax));
         long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
@@ -108,25 +112,53 @@ public final class TankStage {
                         100 * TankStageResult.LEVELS[i], e.note()));
             } else if (e.note().startsWith("extrapolated")) {
                 warnings.add(String.format(Locale.ROOT, "the %.0f%% blend time is extrapolated beyond the simulated"
-                        + " %.4g s from the late exponential decay", 100 * TankStageResult.LEVELS[i], duration));
+                        + " %.4g s from the late exponential decay", 100 * TankStageResult.LEVELS[i],
+                        duration * q.timeScale()));
             }
         }
+        double ls = q.lengthScale();
+        double ts = q.timeScale();
         List<String> notes = new ArrayList<>();
         notes.add(String.format(Locale.ROOT, "transport stage: %d particles in %d blocks, %d steps of %.3g s over"
                         + " %.4g s; loop circulation time %.3g s; cells: %d rings x %d sectors x %d layers of"
-                        + " equal volume", settings.particles(), blocks, steps, dt, duration, loopTime, RINGS,
-                SECTORS, LAYERS));
+                        + " equal volume", settings.particles(), blocks, steps, dt * ts, duration * ts,
+                loopTime * ts, RINGS, SECTORS, LAYERS));
         double elapsed = (System.nanoTime() - start) / 1e9;
         double[][] variance = new double[3][times.length];
+        double[] seconds = new double[times.length];
         for (int j = 0; j < times.length; j++) {
+            seconds[j] = times[j] * ts;
             for (int a = 0; a < 3; a++) {
-                variance[a][j] = moments.pooledVariance(j, a);
+                variance[a][j] = moments.pooledVariance(j, a) * ls * ls;
             }
         }
-        return new TankStageResult(times, MixingTimeEstimator.coefficientOfVariation(cells), variance,
-                MixingTimeEstimator.peakFactor(cells), blend, probes,
-                model.loopFlow(), discharge, volume / discharge, model.meanDiffusivity(), velocityGradient,
-                settings.particles(), blocks, steps, dt, elapsed, warnings, notes);
+        return new TankStageResult(seconds, MixingTimeEstimator.coefficientOfVariation(cells), variance,
+                MixingTimeEstimator.peakFactor(cells), scaled(blend, ts), scaledProbes(probes, ls, ts),
+                model.loopFlow() * ls * ls * ls / ts, discharge, volume * ls * ls * ls / discharge,
+                model.meanDiffusivity() * ls * ls / ts, velocityGradient, settings.particles(), blocks, steps,
+                dt * ts, elapsed, warnings, notes);
+    }
+
+    private static List<Estimate> scaled(List<Estimate> list, double factor) {
+        List<Estimate> out = new ArrayList<>();
+        for (Estimate e : list) {
+            out.add(e.times(factor));
+        }
+        return out;
+    }
+
+    private static List<TankStageResult.Probe> scaledProbes(List<TankStageResult.Probe> probes, double ls,
+                                                           double ts) {
+        List<TankStageResult.Probe> out = new ArrayList<>();
+        for (TankStageResult.Probe p : probes) {
+            double[] at = p.position();
+            for (int i = 0; i < 3; i++) {
+                at[i] *= ls;
+            }
+            out.add(new TankStageResult.Probe(p.name(), at, p.radius() * ls, p.concentration(), p.low(), p.high(),
+                    scaled(p.blendTimes(), ts)));
+        }
+        return out;
     }
 
     /** The probe's reading over the final value, with a 95% band over blocks, at each record. */
