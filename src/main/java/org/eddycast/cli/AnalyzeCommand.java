@@ -61,11 +61,38 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
+    /** The highest sampling rate, the same as a scenario's flow.samplingRate allows. */
+    static final double MAX_SAMPLING_RATE = 1e6;
+
+    /**
+     * Refuses to write statistics that {@code run} would then refuse (a record with absurd time steps gives an
+     * integral length of 1e299 m): the same reader judges them now, naming the field.
+     */
+    private void acceptedByRun(ObjectNode tree) {
+        try {
+            ScenarioReader.parse(tree.toString());
+        } catch (org.eddycast.scenario.ScenarioException e) {
+            throw new IllegalArgumentException("the statistics analysed from " + record + " are outside what run "
+                    + "accepts, so nothing is written: " + e.getMessage().replace("\n", "; ") + " (check the "
+                    + "record's time column and units, or --sampling-rate)", e);
+        }
+    }
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        if (wholeScenario && json == null) {
+            throw new IllegalArgumentException("--scenario applies with --json only (it makes the file --json writes "
+                    + "a whole scenario): add --json FILE, or leave --scenario out");
+        }
+        new OutputPlan().input("the record", record).output("--json", json).check();
         AnalysisOptions options = AnalysisOptions.defaults().withDespike(!noDespike).withDetrend(!noDetrend);
         if (samplingRate != null) {
+            if (!(samplingRate > 0 && samplingRate <= MAX_SAMPLING_RATE)) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT, "--sampling-rate must be between 0 "
+                        + "(exclusive) and %.0e Hz, as flow.samplingRate in a scenario; got %s", MAX_SAMPLING_RATE,
+                        samplingRate));
+            }
             options = options.withSamplingRate(samplingRate);
         }
         RecordAnalysis a = RecordAnalyzer.analyze(record, options);
@@ -80,7 +107,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         a.fit().ifPresent(f -> out.println("  inertial range: " + f.describe()));
         out.println("  derived:");
         for (Derivation d : a.derivations()) {
-            out.printf(Locale.ROOT, "    %-28s %11.4g %-8s %s [%s]%n", d.quantity(), d.value(), d.unit(), d.rule(),
+            // a value the record cannot give (no inertial range, say) is not printed as a number
+            String value = Double.isFinite(d.value()) ? String.format(Locale.ROOT, "%11.4g", d.value())
+                    : "not determined";
+            out.printf(Locale.ROOT, "    %-28s %11s %-8s %s [%s]%n", d.quantity(), value, d.unit(), d.rule(),
                     d.source());
         }
         for (String w : a.warnings()) {
@@ -97,6 +127,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                             ScenarioReader.DEFAULT_MODES, Integrator.STRANG, Double.NaN, Double.NaN, 1, Double.NaN,
                             16 * ScenarioReader.DEFAULT_PARTICLES));
             ObjectNode tree = ScenarioWriter.tree(s);
+            acceptedByRun(tree);
             String text;
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             if (wholeScenario) {

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.eddycast.engine.Benchmark;
+import org.eddycast.engine.BenchmarkPresets;
 import org.eddycast.particles.Integrator;
 import org.eddycast.particles.KernelChoice;
 import org.eddycast.scenario.AtomicFiles;
@@ -31,9 +32,18 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--json", paramLabel = "FILE", description = "Write the figures as JSON.")
     Path json;
 
-    @Option(names = "--answer", description = "Instead of throughput, measure the seconds from process start to "
-            + "the standard workload's diffusivity within a 95%% interval of +-2%% per axis (Strang, shared).")
+    @Option(names = "--answer", description = "Instead of throughput, time each preset: a fresh Java process runs "
+            + "'run PRESET', timed from its start to its end, with the precision asked for or reached.")
     boolean answer;
+
+    @Option(names = "--presets", paramLabel = "DIR", description = "The folder of presets --answer times "
+            + "(default: ${DEFAULT-VALUE}).", defaultValue = "presets")
+    Path presets;
+
+    @Option(names = "--workload-answer", description = "Instead of throughput, measure the seconds from process "
+            + "start to the standard workload's diffusivity within a 95%% interval of +-2%% per axis (Strang, "
+            + "shared).")
+    boolean workloadAnswer;
 
     @Option(names = "--particles", paramLabel = "N", description = "Override the workload's particle count.")
     int particles;
@@ -61,8 +71,16 @@ final class BenchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
+        if (answer && json != null) {
+            throw new IllegalArgumentException("--json applies to the throughput figures only: leave it out with "
+                    + "--answer, whose one line goes to standard output");
+        }
+        new OutputPlan().output("--json", json).check();
         int threadCount = threads.resolve();
         if (answer) {
+            return timePresets(out, threadCount);
+        }
+        if (workloadAnswer) {
             long cpuStart = Benchmark.processCpuNanos();
             Benchmark.Answer a = Benchmark.timeToAnswer(threadCount, 0.02);
             double cpu = (Benchmark.processCpuNanos() - cpuStart) / 1e9;
@@ -93,7 +111,8 @@ final class BenchCommand implements Callable<Integer> {
                     f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
-        if (json != null) {
+        Saves saves = new Saves(out);
+        saves.save("figures", json, () -> {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             ObjectNode root = mapper.createObjectNode();
             ArrayNode results = root.putArray("results");
@@ -112,6 +131,38 @@ final class BenchCommand implements Callable<Integer> {
                 d.put("value", f.diffusivity());
                 d.put("low", f.low());
                 d.put("high", f.high());
+            }
+            AtomicFiles.writeString(json, mapper.writeValueAsString(root));
+        });
+        return saves.finish(spec.commandLine().getErr());
+    }
+
+    private int timePresets(PrintWriter out, int threadCount) throws Exception {
+        List<Path> files = BenchmarkPresets.presetsIn(presets);
+        out.printf(Locale.ROOT, "time to the result of 'run PRESET' from the start of a fresh process, %d presets, "
+                + "%d threads each:%n", files.size(), threadCount);
+        out.printf(Locale.ROOT, "%-28s %9s  %s%n", "preset", "seconds", "precision (95% half-width)");
+        out.flush();
+        List<BenchmarkPresets.PresetTime> times = BenchmarkPresets.time(files, threadCount, t -> {
+            out.printf(Locale.ROOT, "%-28s %9.1f  %s%n", t.preset(), t.seconds(),
+                    BenchmarkPresets.describePrecision(t));
+            out.flush();
+        });
+        if (json != null) {
+            ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+            ObjectNode root = mapper.createObjectNode();
+            root.put("threads", threadCount);
+            ArrayNode table = root.putArray("timeToHeadline");
+            for (BenchmarkPresets.PresetTime t : times) {
+                ObjectNode row = table.addObject();
+                row.put("preset", t.preset());
+                row.put("seconds", t.seconds());
+                if (Double.isNaN(t.precision())) {
+                    row.putNull("precision");
+                } else {
+                    row.put("precision", t.precision());
+                }
+                row.put("precisionRequested", t.requested());
             }
             AtomicFiles.writeString(json, mapper.writeValueAsString(root));
             out.println("figures written to " + json);

@@ -16,6 +16,8 @@ import org.eddycast.particles.Cancellation;
 import org.eddycast.report.OptionComparison;
 import org.eddycast.report.ResultJson;
 import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.scenario.Printable;
+import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.stats.AxisEstimate;
 import picocli.CommandLine.Command;
@@ -48,17 +50,35 @@ final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        List<StudyResult> results = new ArrayList<>();
+        PrintWriter err = spec.commandLine().getErr();
+        // every file is read and every output checked before anything is simulated
+        OutputPlan plan = new OutputPlan().output("--json", json).output("--pdf", pdf);
+        List<Scenario> read = new ArrayList<>();
         for (Path p : scenarios) {
-            results.add(Engine.run(ScenarioReader.read(p), threads.resolve(),
-                    new ProgressPrinter(spec.commandLine().getErr(), ProgressPrinter.terminal()), new Cancellation()));
+            read.add(readNamed(p));
+            plan.input("the scenario file", p);
+        }
+        plan.check();
+        for (Scenario s : read) {
+            BeforeRun.show(err, s, true);
+        }
+        List<StudyResult> results = new ArrayList<>();
+        for (Scenario s : read) {
+            ProgressPrinter progress = ProgressPrinter.start(err);
+            try {
+                results.add(Engine.run(s, threads.resolve(), progress, new Cancellation()));
+            } finally {
+                progress.finish();
+            }
         }
         out.printf(Locale.ROOT, "%-48s %12s %12s %12s %s%n", "option", "D_x m^2/s", "D_y m^2/s", "D_z m^2/s",
                 "first mixing figure");
         for (StudyResult r : results) {
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-48.48s", r.scenario().name()));
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-48.48s",
+                    Printable.escape(r.scenario().name())));
             for (AxisEstimate a : r.diffusivity().axes()) {
-                row.append(String.format(Locale.ROOT, " %12.4g", a.diffusivity().value()));
+                row.append(a.determined() ? String.format(Locale.ROOT, " %12.4g", a.diffusivity().value())
+                        : String.format(Locale.ROOT, " %12s", "not determined"));
             }
             if (r.forecast() != null && !r.forecast().mixing().isEmpty()) {
                 var m = r.forecast().mixing().get(0);
@@ -72,7 +92,8 @@ final class CompareCommand implements Callable<Integer> {
         List<String> names = results.stream().map(r -> r.scenario().name()).toList();
         List<String> verdict = List.of(OptionComparison.of(names, results).verdict());
         verdict.forEach(out::println);
-        if (json != null) {
+        Saves saves = new Saves(out);
+        saves.save("comparison", json, () -> {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             ObjectNode root = mapper.createObjectNode();
             ArrayNode options = root.putArray("options");
@@ -80,12 +101,19 @@ final class CompareCommand implements Callable<Integer> {
             ArrayNode v = root.putArray("verdict");
             verdict.forEach(v::add);
             AtomicFiles.writeString(json, mapper.writeValueAsString(root));
-            out.println("comparison written to " + json);
+        });
+        saves.save("comparison sheet", pdf, () -> org.eddycast.sheet.SummarySheetPdf.writeOptions(names, results, pdf));
+        return saves.finish(err);
+    }
+
+    /** Reads one option's scenario; a problem is reported with the file's name. */
+    private static Scenario readNamed(Path p) throws java.io.IOException {
+        try {
+            return ScenarioReader.read(p);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(p + ": " + e.getMessage(), e);
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new IllegalArgumentException("no such file: " + p, e);
         }
-        if (pdf != null) {
-            org.eddycast.sheet.SummarySheetPdf.writeOptions(names, results, pdf);
-            out.println("comparison sheet written to " + pdf);
-        }
-        return 0;
     }
 }

@@ -15,7 +15,7 @@ import picocli.CommandLine.Command;
 @Command(name = "eddycast", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Screening forecasts of tracer spreading in turbulent tanks and channels.",
         subcommands = {RunCommand.class, CompareCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class, MemoryCommand.class})
-public final class Main implements Runnable {
+public final class Main implements Runnable, CommandLine.IExitCodeGenerator {
 
     /** Exit status for bad input. */
     public static final int BAD_INPUT = 2;
@@ -43,6 +43,10 @@ public final class Main implements Runnable {
         cmd.setOut(out);
         cmd.setErr(err);
         cmd.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
+            if (outOfMemory(e)) {
+                err.println("eddycast: " + OUT_OF_MEMORY);
+                return FAULT;
+            }
             if (e instanceof IllegalArgumentException || e instanceof IOException
                     || e instanceof org.eddycast.measure.RecordFormatException
                     || e instanceof NumericalBlowupException) {
@@ -57,7 +61,30 @@ public final class Main implements Runnable {
             e.printStackTrace(err);
             return FAULT;
         });
-        return cmd.execute(args);
+        try {
+            return cmd.execute(args);
+        } catch (OutOfMemoryError e) {
+            err.println("eddycast: " + OUT_OF_MEMORY);
+            return FAULT;
+        }
+    }
+
+    /** What to do when the heap is too small, said plainly instead of with a stack trace. */
+    static final String OUT_OF_MEMORY = "out of memory: the run needs more memory than the Java heap allows; give "
+            + "it more (java -Xmx4g ...) or ask for fewer particles or modes (simulation.particles, "
+            + "simulation.modes, simulation.maxParticles)";
+
+    /** True when the failure is, or was caused by, running out of memory (a worker thread's included). */
+    static boolean outOfMemory(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof OutOfMemoryError) {
+                return true;
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return false;
     }
 
     private static String message(Exception e) {
@@ -78,19 +105,31 @@ public final class Main implements Runnable {
         out.println("No display: running the bundled preset " + org.eddycast.scenario.BundledPresets.STANDARD_NAME
                 + " in the terminal (eddycast --help lists the commands).");
         out.flush();
+        // the sheet goes to the working folder: checked first, so an unwritable folder costs no run
+        new OutputPlan().output("the summary sheet", HEADLESS_SHEET).check();
         org.eddycast.scenario.Scenario s = org.eddycast.scenario.BundledPresets.standard();
-        ProgressPrinter progress = new ProgressPrinter(err, ProgressPrinter.terminal());
-        org.eddycast.engine.StudyResult r = org.eddycast.engine.Engine.run(s,
-                org.eddycast.engine.Engine.defaultThreads(), progress, new org.eddycast.particles.Cancellation());
-        progress.finish();
-        out.print(org.eddycast.report.TextSummary.of(r));
+        BeforeRun.show(err, s, false);
+        ProgressPrinter progress = ProgressPrinter.start(err);
+        org.eddycast.engine.StudyResult r;
         try {
-            org.eddycast.sheet.SummarySheetPdf.write(r, HEADLESS_SHEET);
-        } catch (IOException e) {
-            throw new java.io.UncheckedIOException(e);
+            r = org.eddycast.engine.Engine.run(s, org.eddycast.engine.Engine.defaultThreads(), progress,
+                    new org.eddycast.particles.Cancellation());
+        } finally {
+            progress.finish();
         }
-        out.println("summary sheet written to " + HEADLESS_SHEET.toAbsolutePath());
-        out.flush();
+        out.print(org.eddycast.report.TextSummary.of(r));
+        Saves saves = new Saves(out);
+        saves.save("summary sheet", HEADLESS_SHEET.toAbsolutePath(),
+                () -> org.eddycast.sheet.SummarySheetPdf.write(r, HEADLESS_SHEET));
+        exitStatus = saves.finish(err);
+    }
+
+    /** The exit status of the no-argument run (picocli's Runnable cannot return one). */
+    private int exitStatus;
+
+    @Override
+    public int getExitCode() {
+        return exitStatus;
     }
 
     /** The version for --version. */

@@ -10,6 +10,7 @@ import org.eddycast.report.CurveCsv;
 import org.eddycast.report.ResultJson;
 import org.eddycast.report.TextSummary;
 import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.scenario.MeasuredFlow;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
 import picocli.CommandLine.Command;
@@ -46,23 +47,25 @@ final class RunCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         Scenario scenario = ScenarioReader.read(scenarioFile);
-        ProgressPrinter progress = new ProgressPrinter(err, ProgressPrinter.terminal());
-        StudyResult result = Engine.run(scenario, threads.resolve(), progress, new Cancellation());
-        progress.finish();
+        OutputPlan plan = new OutputPlan().input("the scenario file", scenarioFile)
+                .output("--json", json).output("--csv", csv).output("--pdf", pdf);
+        if (scenario.flow() instanceof MeasuredFlow m) {
+            plan.input("the record", m.resolved());
+        }
+        plan.check();
+        BeforeRun.show(err, scenario, false);
+        ProgressPrinter progress = ProgressPrinter.start(err);
+        StudyResult result;
+        try {
+            result = Engine.run(scenario, threads.resolve(), progress, new Cancellation());
+        } finally {
+            progress.finish();
+        }
         out.print(TextSummary.of(result));
-        if (json != null) {
-            AtomicFiles.writeString(json, ResultJson.text(result));
-            out.println("result written to " + json);
-        }
-        if (csv != null) {
-            AtomicFiles.writeString(csv, CurveCsv.text(result));
-            out.println("curves written to " + csv);
-        }
-        if (pdf != null) {
-            org.eddycast.sheet.SummarySheetPdf.write(result, pdf);
-            out.println("summary sheet written to " + pdf);
-        }
-        out.flush();
-        return 0;
+        Saves saves = new Saves(out);
+        saves.save("result", json, () -> AtomicFiles.writeString(json, ResultJson.text(result)));
+        saves.save("curves", csv, () -> AtomicFiles.writeString(csv, CurveCsv.text(result)));
+        saves.save("summary sheet", pdf, () -> org.eddycast.sheet.SummarySheetPdf.write(result, pdf));
+        return saves.finish(err);
     }
 }

@@ -3,6 +3,7 @@ package org.eddycast.engine;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.eddycast.particles.EnsembleRunner;
 import org.eddycast.field.BeltramiFlow;
 import org.eddycast.field.CellularFlow;
 import org.eddycast.field.FieldModel;
@@ -133,13 +134,14 @@ public final class CaseBuilder {
         } else {
             duration = sim.duration() / scales.time();
         }
-        int steps = (int) Math.round(duration / dt);
-        if (steps < 2) {
-            throw new ScenarioException("simulation.duration must be at least two time steps");
-        }
-        if (steps > 100_000_000) {
-            throw new ScenarioException(String.format(Locale.ROOT,
-                    "simulation.timeStep gives %d steps; at most 1e8 are allowed: raise the time step", steps));
+        int steps = RunSize.steps(duration, dt, scales.time(), Double.isNaN(sim.duration()),
+                Double.isNaN(sim.timeStep()));
+        long block = EnsembleRunner.blockSizeFor(sim.groupSize());
+        long run = Math.max(2, (sim.particles() + block - 1) / block) * block;
+        if (run != sim.particles()) {
+            notes.add(String.format(Locale.ROOT, "particles raised from %d to %d: the run is made of at least two "
+                    + "whole blocks of %d (groups of %d sharing a realization)", sim.particles(), run, block,
+                    sim.groupSize()));
         }
         String fullKey = key + String.format(Locale.ROOT, "|%s|%.12g|%d|%d|%d|%d|%d|%s", sim.integrator(), dt, steps,
                 sim.groupSize(), sim.modes(), sim.particles(), sim.seed(), sim.precisionTarget());

@@ -4,6 +4,8 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import org.eddycast.forecast.ChannelRules;
+import org.eddycast.forecast.Forecast;
+import org.eddycast.stats.AxisEstimate;
 import org.eddycast.forecast.ModeledTurbulence;
 import org.eddycast.forecast.TankRules;
 import org.eddycast.measure.AnalysisOptions;
@@ -47,10 +49,10 @@ public final class Engine {
                     List.of("turbulence statistics given directly by the user"), null);
         }
         if (s.flow() instanceof TankFlow t) {
-            return modeled(TankRules.STANDARD.model(t.design()));
+            return modeled(TankRules.STANDARD.model(t.design()), Plausibility.warnings(s));
         }
         if (s.flow() instanceof ChannelFlow c) {
-            return modeled(ChannelRules.STANDARD.model(c.design()));
+            return modeled(ChannelRules.STANDARD.model(c.design()), Plausibility.warnings(s));
         }
         if (s.flow() instanceof MeasuredFlow m) {
             return measured(m);
@@ -58,8 +60,10 @@ public final class Engine {
         return new ResolvedFlow(null, List.of(), List.of(), null);
     }
 
-    private static ResolvedFlow modeled(ModeledTurbulence m) {
-        return new ResolvedFlow(m.statistics(), m.warnings(), m.assumptions(), null);
+    private static ResolvedFlow modeled(ModeledTurbulence m, List<String> implausible) {
+        List<String> warnings = new ArrayList<>(implausible);
+        warnings.addAll(m.warnings());
+        return new ResolvedFlow(m.statistics(), warnings, m.assumptions(), null);
     }
 
     private static ResolvedFlow measured(MeasuredFlow m) {
@@ -80,18 +84,22 @@ public final class Engine {
 
     /**
      * Checks a scenario before it runs, without simulating anything: the warnings a user should see before
-     * spending the run's time. Today one check: a time step above {@link CaseBuilder#MAX_STEP_FRACTION} of the
-     * field's shortest resolved time scale (the smaller of the correlation time and the inverse rms velocity
-     * gradient) biases the answer, so the warning names simulation.timeStep, the limit and a step to use. An
-     * empty list means nothing to report; a time step left out is chosen safely by the engine and never warned
-     * about.
+     * spending the run's time. A design outside the range its rules were made for ({@link Plausibility}); and a
+     * time step above {@link CaseBuilder#MAX_STEP_FRACTION} of the field's shortest resolved time scale (the
+     * smaller of the correlation time and the inverse rms velocity gradient), which biases the answer, so the
+     * warning names simulation.timeStep, the limit and a step to use. An empty list means nothing to report; a
+     * time step left out is chosen safely by the engine and never warned about. The command line, the window
+     * and the JSON result all show it.
      *
      * @throws org.eddycast.scenario.ScenarioException for a scenario the engine cannot run
      * @throws org.eddycast.measure.RecordFormatException for a record that cannot be read
      */
     public static List<String> preflight(Scenario s) {
-        DimensionlessCase c = dimensionlessCase(s);
-        List<String> warnings = new ArrayList<>();
+        return preflight(s, dimensionlessCase(s));
+    }
+
+    private static List<String> preflight(Scenario s, DimensionlessCase c) {
+        List<String> warnings = new ArrayList<>(Plausibility.warnings(s));
         String warning = CaseBuilder.timeStepWarning(c);
         if (warning != null) {
             warnings.add(warning);
@@ -109,13 +117,19 @@ public final class Engine {
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel) {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
+        List<String> preflight = preflight(s, c);
         boolean staged = s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow;
         double fieldShare = staged ? FIELD_SHARE : 1.0;
         DiffusivityResult r = SimulationCache.shared().run(c, threads,
                 (fraction, partial) -> listener.progress(fieldShare * fraction, partial), cancel);
+        // a forecast from a diffusivity that is not determined (negative, or not a number) would be nonsense
+        boolean determined = r.axes().stream().allMatch(AxisEstimate::determined);
+        if (!determined) {
+            return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null);
+        }
         TransportResult transport = TransportStudy.run(s, flow, r, threads,
                 fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
         return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
-                Instant.now(), transport);
+                Instant.now(), preflight, transport);
     }
 }

@@ -17,7 +17,7 @@ import org.eddycast.forecast.FreeAxis;
 import org.eddycast.forecast.HandbookEstimate;
 import org.eddycast.forecast.InstantaneousRelease;
 import org.eddycast.forecast.TankBlendCorrelation;
-import org.eddycast.forecast.TwoWallCosineAxis;
+import org.eddycast.forecast.TwoWallAxis;
 import org.eddycast.forecast.WellMixedTime;
 import org.eddycast.forecast.WidthMeasure;
 import org.eddycast.scenario.ChannelDesign;
@@ -115,7 +115,7 @@ public final class ForecastBuilder {
             assumptions.add(String.format(Locale.ROOT, "the cylindrical tank is taken as a box %.3g m x %.3g m x "
                     + "%.3g m of the same cross-section area", side, side, size[2]));
             double[] position = at;
-            density = (axis, dEff) -> new TwoWallCosineAxis(0, size[axis], position[axis], dEff);
+            density = (axis, dEff) -> new TwoWallAxis(0, size[axis], position[axis], dEff);
             for (int a = 0; a < 3; a++) {
                 wallLength[a] = size[a];
                 wallRelease[a] = position[a];
@@ -166,7 +166,7 @@ public final class ForecastBuilder {
             double[] upper = {Double.NaN, ch.width(), ch.depth()};
             double[] at = {0, y0, ch.depth()};
             density = (axis, dEff) -> axis == 0 ? new FreeAxis(0, dEff)
-                    : new TwoWallCosineAxis(lower[axis], upper[axis], at[axis], dEff);
+                    : new TwoWallAxis(lower[axis], upper[axis], at[axis], dEff);
             if (Double.isNaN(horizon)) {
                 horizon = 1.2 * Math.max(across, overDepth) / u;
             }

@@ -1,6 +1,7 @@
 package org.eddycast.engine;
 
 import java.time.Instant;
+import java.util.List;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TurbulenceStatistics;
@@ -8,16 +9,15 @@ import org.eddycast.transport.TransportResult;
 
 /**
  * Everything one scenario produced: the scenario itself, its resolved flow, the diffusivity result, the tool
- * version and when it finished, the forecast in physical units, and what the transport stage found in the real
- * geometry (null for flows given directly or measured).
+ * version and when it finished, the forecast in physical units (null when a diffusivity it needs is not
+ * determined), the warnings shown before the run ({@link Engine#preflight}), and what the transport stage found
+ * in the real geometry (null for flows given directly or measured).
  */
 public record StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
-                          String toolVersion, Instant finished, TransportResult transport) {
+                          String toolVersion, Instant finished, List<String> preflight, TransportResult transport) {
 
-    /** A result with no transport stage. */
-    public StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
-                       String toolVersion, Instant finished) {
-        this(scenario, flow, diffusivity, forecast, toolVersion, finished, null);
+    public StudyResult {
+        preflight = List.copyOf(preflight);
     }
 
     /** The turbulence statistics (null for a verification flow). */

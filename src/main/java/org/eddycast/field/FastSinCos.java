@@ -128,16 +128,6 @@ public final class FastSinCos {
         return Math.fma(c + c, c, -1.0);
     }
 
-    /** Sine of an angle already in [-pi/2, pi/2], by the polynomial alone. */
-    public static double sinOfReduced(double h) {
-        return h * sinePolynomial(h * h);
-    }
-
-    /** Cosine of an angle already in [-pi/2, pi/2], by the polynomial alone. */
-    public static double cosOfReduced(double h) {
-        return cosinePolynomial(h * h);
-    }
-
     /** phase / 2 - q pi with q the nearest whole number of turns: in [-pi/2, pi/2]. */
     private static double halfAngle(double phase) {
         double q = Math.rint(phase * ONE_OVER_TWO_PI);

@@ -15,11 +15,14 @@ public final class PowerLawBand implements SpectrumShape {
      * @param slope the exponent, between -10 and 10
      * @param ratio largest over smallest wavenumber, at least 1 (1 gives a single wavenumber shell)
      */
+    /** The widest band the field samples: six decades of wavenumber. */
+    public static final double MAX_RATIO = 1e6;
+
     public PowerLawBand(double slope, double ratio) {
         if (!(slope >= -10 && slope <= 10)) {
             throw new IllegalArgumentException("spectrum slope must be between -10 and 10; got " + slope);
         }
-        if (!(ratio >= 1 && ratio <= 1e6)) {
+        if (!(ratio >= 1 && ratio <= MAX_RATIO)) {
             throw new IllegalArgumentException("wavenumber ratio must be between 1 and 1e6; got " + ratio);
         }
         this.slope = slope;

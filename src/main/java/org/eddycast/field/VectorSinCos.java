@@ -13,8 +13,7 @@ import jdk.incubator.vector.VectorSpecies;
  * cos(pi f) = Q(f^2) by Horner's rule with fused multiply-adds ({@link FastSinCos#TURN_SINE},
  * {@link FastSinCos#TURN_COSINE}), and the double-angle formulas give sin(2 pi f) = (2 sin(pi f)) cos(pi f)
  * and cos(2 pi f) = (2 cos(pi f)) cos(pi f) - 1. Floating-point arithmetic only: no quadrant bits, no
- * reinterpretation of lanes. The constants S0..S6 and C0..C7 are the radian polynomials of an angle already
- * in [-pi/2, pi/2], which the normal variates use.
+ * reinterpretation of lanes.
  *
  * <p>Accuracy: within 1e-13 absolute of the sine and cosine of 2 pi t for the turn phase t as the kernel forms
  * it (tested for |t| up to 1e5); that phase carries the rounding of its dot product, as a phase in radians
@@ -42,22 +41,6 @@ public final class VectorSinCos {
     public static final DoubleVector MINUS_ONE = DoubleVector.broadcast(SPECIES, -1.0);
     /** 1.5 * 2^52. */
     public static final DoubleVector ROUNDER = DoubleVector.broadcast(SPECIES, 6755399441055744.0);
-    public static final DoubleVector ONE = DoubleVector.broadcast(SPECIES, 1.0);
-    public static final DoubleVector S0 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[0]);
-    public static final DoubleVector S1 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[1]);
-    public static final DoubleVector S2 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[2]);
-    public static final DoubleVector S3 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[3]);
-    public static final DoubleVector S4 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[4]);
-    public static final DoubleVector S5 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[5]);
-    public static final DoubleVector S6 = DoubleVector.broadcast(SPECIES, FastSinCos.SINE[6]);
-    public static final DoubleVector C0 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[0]);
-    public static final DoubleVector C1 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[1]);
-    public static final DoubleVector C2 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[2]);
-    public static final DoubleVector C3 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[3]);
-    public static final DoubleVector C4 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[4]);
-    public static final DoubleVector C5 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[5]);
-    public static final DoubleVector C6 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[6]);
-    public static final DoubleVector C7 = DoubleVector.broadcast(SPECIES, FastSinCos.COSINE[7]);
     public static final DoubleVector TS0 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[0]);
     public static final DoubleVector TS1 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[1]);
     public static final DoubleVector TS2 = DoubleVector.broadcast(SPECIES, FastSinCos.TURN_SINE[2]);

@@ -9,7 +9,7 @@ package org.eddycast.forecast;
  *
  * <p>Coordinates: x downstream of the source, z up from the bed (0 to h). Across the channel, y runs from one
  * bank (0 to W) when the width is finite; the bed and surface, and the banks when the width is given, reflect
- * by image series ({@link TwoWallImageAxis}), which suit the region near the source. With an infinite width
+ * by the image or cosine series, whichever is cheaper ({@link TwoWallAxis}). With an infinite width
  * y is unbounded.
  *
  * <p>Widths ({@link #lateralSigma}, {@link #verticalSigma}) are the free-space values sqrt(2 eps x / U): they
@@ -50,8 +50,8 @@ public final class ChannelPlume {
         this.verticalMixing = Checks.positive("verticalMixing", verticalMixing, "m^2/s");
         this.across = Double.isInfinite(width)
                 ? new FreeAxis(releaseY, transverseMixing)
-                : new TwoWallImageAxis(0.0, width, releaseY, transverseMixing);
-        this.vertical = new TwoWallImageAxis(0.0, depth, releaseZ, verticalMixing);
+                : new TwoWallAxis(0.0, width, releaseY, transverseMixing);
+        this.vertical = new TwoWallAxis(0.0, depth, releaseZ, verticalMixing);
     }
 
     /** Concentration (kg/m^3) at x (m) downstream, y (m) across, z (m) above the bed. */

@@ -2,6 +2,7 @@ package org.eddycast.forecast;
 
 import java.util.List;
 
+import org.eddycast.field.PowerLawBand;
 import org.eddycast.scenario.Derivation;
 import org.eddycast.scenario.SpectrumSpec;
 
@@ -21,6 +22,14 @@ record SpectrumStep(SpectrumSpec spec, List<Derivation> derivations) {
             warnings.add(String.format("the integral length is only %.3g Kolmogorov lengths: no inertial range,"
                     + " the -5/3 band collapses to a single scale", integralLength / eta));
             ratio = 1.0;
+        }
+        if (ratio > PowerLawBand.MAX_RATIO) {
+            // a huge vessel or a fast flow: the inertial range spans more decades than the field samples
+            warnings.add(String.format("the inertial range spans %.3g decades of wavenumber, more than the %.0f the "
+                    + "field samples: eddies smaller than L / %.0e are left out (they carry little of the spreading,"
+                    + " whose eddy diffusivity is set by the large scales)", Math.log10(ratio),
+                    Math.log10(PowerLawBand.MAX_RATIO), PowerLawBand.MAX_RATIO));
+            ratio = PowerLawBand.MAX_RATIO;
         }
         Derivation kolmogorov = new Derivation("Kolmogorov length", eta, "m", "eta = (nu^3 / eps)^(1/4)",
                 Sources.KOLMOGOROV_1941.cite());

@@ -4,6 +4,7 @@ import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.charset.StandardCharsets;
+import org.eddycast.scenario.TextFiles;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.BasicFileAttributes;
@@ -89,10 +90,28 @@ public final class RecordReader {
 
     /** As {@link #read(Path)}, with the file's reader passed through {@code wrap} (tests use it to act mid-read). */
     VelocityRecord read(Path path, UnaryOperator<Reader> wrap) {
+        try {
+            TextFiles.checkStart(path, "record file");
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new RecordFormatException(0, 0, "could not read the record file " + path + ": no such file");
+        } catch (IOException e) {
+            throw new RecordFormatException(0, 0, e.getMessage());
+        }
         FileState before = FileState.of(path);
         VelocityRecord record;
         try (Reader in = wrap.apply(Files.newBufferedReader(path, StandardCharsets.UTF_8))) {
             record = read(in, path.getFileName() == null ? path.toString() : path.getFileName().toString());
+        } catch (java.io.UncheckedIOException e) {
+            if (!(e.getCause() instanceof java.nio.charset.CharacterCodingException)) {
+                throw e;
+            }
+            // not UTF-8 further in: the whole file says which byte and line
+            try {
+                TextFiles.decodeUtf8(Files.readAllBytes(path), path + " (record file)");
+            } catch (IOException described) {
+                throw new RecordFormatException(0, 0, described.getMessage());
+            }
+            throw new RecordFormatException(0, 0, "could not read the record file " + path + ": " + e);
         } catch (IOException e) {
             throw new RecordFormatException(0, 0, "could not read the record file " + path + ": " + e.getMessage()
                     + " (a readable UTF-8 text file is needed)");
@@ -132,6 +151,9 @@ public final class RecordReader {
             while ((text = lines.readLine()) != null) {
                 parser.accept(text);
             }
+        } catch (java.nio.charset.CharacterCodingException e) {
+            // the file reader names the encoding (read(Path) catches this)
+            throw new java.io.UncheckedIOException(e);
         } catch (IOException e) {
             throw new RecordFormatException(parser.lineNo + 1, 0, "could not read the record: " + e.getMessage());
         }

@@ -38,10 +38,13 @@ public final class ResultJson {
         for (AxisEstimate a : r.axes()) {
             SlopeEstimate e = a.diffusivity();
             ObjectNode axis = eddy.putObject(a.axisName());
-            number(axis, "value", e.value());
-            number(axis, "low", e.low());
-            number(axis, "high", e.high());
-            number(axis, "standardError", e.standardError());
+            axis.put("determined", a.determined());
+            // a value that is not determined is never written as a result (see the warnings)
+            double shown = a.determined() ? 1 : Double.NaN;
+            number(axis, "value", shown * e.value());
+            number(axis, "low", shown * e.low());
+            number(axis, "high", shown * e.high());
+            number(axis, "standardError", shown * e.standardError());
             axis.put("settled", a.settled());
             number(tl, a.axisName(), a.lagrangianTimeScale());
         }
@@ -66,6 +69,8 @@ public final class ResultJson {
         run.put("threads", r.threads());
         number(run, "elapsedSeconds", r.elapsedSeconds());
         run.put("fromCache", r.fromCache());
+        ArrayNode preflight = root.putArray("preflight");
+        study.preflight().forEach(preflight::add);
         ArrayNode warnings = root.putArray("warnings");
         r.warnings().forEach(warnings::add);
         ArrayNode notes = root.putArray("notes");

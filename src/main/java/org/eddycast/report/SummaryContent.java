@@ -107,7 +107,9 @@ public record SummaryContent(String title, String scenarioName, String route, St
         DiffusivityResult r = s.diffusivity();
         Forecast f = s.forecast();
         List<String> assumptions = new ArrayList<>(f != null ? f.assumptions() : s.flow().assumptions());
-        s.flow().warnings().forEach(w -> assumptions.add("Warning: " + w));
+        s.preflight().forEach(w -> assumptions.add("Warning (before the run): " + w));
+        s.flow().warnings().stream().filter(w -> !s.preflight().contains(w))
+                .forEach(w -> assumptions.add("Warning: " + w));
         r.warnings().forEach(w -> assumptions.add("Warning: " + w));
         r.notes().forEach(n -> assumptions.add("Note: " + n));
         if (f == null) {
@@ -387,11 +389,14 @@ public record SummaryContent(String title, String scenarioName, String route, St
         List<Row> rows = new ArrayList<>();
         for (AxisEstimate a : r.axes()) {
             SlopeEstimate e = a.diffusivity();
-            rows.add(new Row("eddy diffusivity along " + a.axisName(), number(e.value()),
-                    "[" + number(e.low()) + ", " + number(e.high()) + "]", "m\u00b2/s"));
+            rows.add(a.determined() ? new Row("eddy diffusivity along " + a.axisName(), number(e.value()),
+                    "[" + number(e.low()) + ", " + number(e.high()) + "]", "m\u00b2/s")
+                    : new Row("eddy diffusivity along " + a.axisName(), "not determined", "", "m\u00b2/s"));
         }
         for (AxisEstimate a : r.axes()) {
-            rows.add(row("Lagrangian time scale along " + a.axisName(), a.lagrangianTimeScale(), "s"));
+            rows.add(a.timeScaleDetermined() ? row("Lagrangian time scale along " + a.axisName(),
+                    a.lagrangianTimeScale(), "s")
+                    : new Row("Lagrangian time scale along " + a.axisName(), "not determined", "", "s"));
         }
         TurbulenceStatistics t = s.turbulence();
         if (t != null) {

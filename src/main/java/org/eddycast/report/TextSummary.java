@@ -1,5 +1,7 @@
 package org.eddycast.report;
 
+import org.eddycast.scenario.Printable;
+
 import java.util.Locale;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
@@ -18,17 +20,24 @@ public final class TextSummary {
         DiffusivityResult r = s.diffusivity();
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "eddycast %s, seed %d: %s%n", s.toolVersion(),
-                s.scenario().simulation().seed(), s.scenario().name()));
+                s.scenario().simulation().seed(), Printable.escape(s.scenario().name())));
+        for (String w : s.preflight()) {
+            sb.append("  WARNING (before the run): ").append(w).append('\n');
+        }
         sb.append("  field: ").append(r.fieldDescription()).append('\n');
         sb.append(String.format(Locale.ROOT, "  Kubo number %s, Peclet number %s%n", number(r.kubo()),
                 number(r.peclet())));
         sb.append("  eddy diffusivity (m^2/s, 95% interval):\n");
         for (AxisEstimate a : r.axes()) {
             SlopeEstimate e = a.diffusivity();
+            if (!a.determined()) {
+                sb.append("    ").append(a.axisName()).append("  not determined (see the warnings)\n");
+                continue;
+            }
             sb.append(String.format(Locale.ROOT, "    %s  %.4g  [%.4g, %.4g]  (+-%.1f%%)   Lagrangian time scale %s%n",
                     a.axisName(), e.value(), e.low(), e.high(), 100 * e.relativeHalfWidth(),
                     Double.isFinite(a.lagrangianTimeScale()) ? String.format(Locale.ROOT, "%.4g s",
-                            a.lagrangianTimeScale()) : "n/a"));
+                            a.lagrangianTimeScale()) : "not determined"));
         }
         sb.append(String.format(Locale.ROOT, "  %d particles in %d blocks, %d steps of %.4g s (%.4g s simulated), "
                         + "%d threads, %.1f s%s%n", r.particles(), r.blocks(), r.steps(), r.timeStep(), r.duration(),
@@ -41,12 +50,17 @@ public final class TextSummary {
             }
         }
         for (String w : s.flow().warnings()) {
-            sb.append("  WARNING (flow): ").append(w).append('\n');
+            if (!s.preflight().contains(w)) {
+                sb.append("  WARNING (flow): ").append(w).append('\n');
+            }
         }
         if (s.transport() != null) {
             TransportText.append(sb, s.transport());
         }
         Forecast f = s.forecast();
+        if (f == null) {
+            sb.append("  forecast: not determined (a diffusivity it needs is not determined; see the warnings)\n");
+        }
         if (f != null) {
             sb.append(String.format(Locale.ROOT, "  forecast (%s; %s):%n", f.inDistance() ? "distance downstream"
                     : "time", f.measure().label()));
@@ -80,11 +94,9 @@ public final class TextSummary {
         for (String w : r.warnings()) {
             sb.append("  WARNING: ").append(w).append('\n');
         }
-        if (f != null) {
-            sb.append("  cautions:\n");
-            for (String c : f.cautions()) {
-                sb.append("    - ").append(c).append('\n');
-            }
+        sb.append("  cautions:\n");
+        for (String c : org.eddycast.forecast.Cautions.ALL) {
+            sb.append("    - ").append(c).append('\n');
         }
         return sb.toString();
     }

@@ -32,7 +32,30 @@ public final class AtomicFiles {
         void writeTo(OutputStream out) throws IOException;
     }
 
+    /** Temporary files being written now: removed by the shutdown hook if the process is stopped midway. */
+    private static final java.util.Set<Path> UNFINISHED = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
+    static {
+        // Ctrl-C (SIGINT) or SIGTERM while a file is written runs the shutdown hooks, not the finally blocks
+        Runtime.getRuntime().addShutdownHook(new Thread(AtomicFiles::removeUnfinished, "eddycast-remove-part-files"));
+    }
+
     private AtomicFiles() {
+    }
+
+    /**
+     * Deletes every temporary file of a write still in progress: the body of the shutdown hook, so an
+     * interrupted save leaves no {@code .part} file beside its target (the target itself is untouched).
+     */
+    static void removeUnfinished() {
+        for (Path p : UNFINISHED) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException e) {
+                // the process is ending: nothing more can be done for this file
+            }
+            UNFINISHED.remove(p);
+        }
     }
 
     /** Writes {@code content} to {@code target} atomically. */
@@ -49,6 +72,7 @@ public final class AtomicFiles {
         } catch (IOException e) {
             throw explain(absolute, e);
         }
+        UNFINISHED.add(temporary);
         boolean moved = false;
         try {
             keepPermissions(absolute, temporary);
@@ -71,6 +95,7 @@ public final class AtomicFiles {
             if (!moved) {
                 Files.deleteIfExists(temporary);
             }
+            UNFINISHED.remove(temporary);
         }
     }
 

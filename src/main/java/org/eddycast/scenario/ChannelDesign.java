@@ -29,27 +29,27 @@ public record ChannelDesign(double depth, double width, double meanVelocity, Dou
     }
 
     public ChannelDesign {
-        DesignChecks.positive("channel.depth", depth, "m");
-        DesignChecks.positive("channel.width", width, "m");
-        DesignChecks.positive("channel.meanVelocity", meanVelocity, "m/s");
+        DesignChecks.positive("flow.depth", depth, "m");
+        DesignChecks.positive("flow.width", width, "m");
+        DesignChecks.positive("flow.meanVelocity", meanVelocity, "m/s");
         int given = (bedSlope != null ? 1 : 0) + (shearVelocity != null ? 1 : 0) + (manningN != null ? 1 : 0);
         if (given != 1) {
-            throw new IllegalArgumentException("channel: give exactly one of bedSlope (m/m), shearVelocity (m/s)"
+            throw new IllegalArgumentException("flow: give exactly one of bedSlope (m/m), shearVelocity (m/s)"
                     + " or manningN (s/m^(1/3)); got " + given);
         }
         if (bedSlope != null) {
-            DesignChecks.openRange("channel.bedSlope", bedSlope, 0, 1, "m/m");
+            DesignChecks.openRange("flow.bedSlope", bedSlope, 0, 1, "m/m");
         }
         if (shearVelocity != null) {
-            DesignChecks.positive("channel.shearVelocity", shearVelocity, "m/s");
+            DesignChecks.positive("flow.shearVelocity", shearVelocity, "m/s");
         }
         if (manningN != null) {
-            DesignChecks.openRange("channel.manningN", manningN, 0, 1, "s/m^(1/3)");
+            DesignChecks.openRange("flow.manningN", manningN, 0, 1, "s/m^(1/3)");
         }
         if (kinematicViscosity == null) {
             kinematicViscosity = TankDesign.WATER_20C_KINEMATIC_VISCOSITY;
         }
-        DesignChecks.positive("channel.kinematicViscosity", kinematicViscosity, "m^2/s");
+        DesignChecks.positive("flow.kinematicViscosity", kinematicViscosity, "m^2/s");
         if (section == null) {
             section = new ChannelSection.Rectangular(width, depth);
         }

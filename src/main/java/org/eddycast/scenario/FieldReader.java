@@ -31,6 +31,14 @@ final class FieldReader {
         return path.isEmpty() ? field : path + "." + field;
     }
 
+    /**
+     * Marks every field of this object as known: used when the object's kind is itself wrong, so that its other
+     * fields are not each reported as "not used here" on top of the one real problem.
+     */
+    void acceptAll() {
+        node.fieldNames().forEachRemaining(known::add);
+    }
+
     /** Marks fields as known without reading them (fields another route of the same object reads). */
     void allow(String... fields) {
         known.addAll(List.of(fields));
@@ -46,7 +54,7 @@ final class FieldReader {
             String field = names.next();
             if (!known.contains(field)) {
                 String nearest = nearest(field);
-                String shown = field.matches("[A-Za-z_][A-Za-z0-9_]*") ? field : "\"" + field + "\"";
+                String shown = field.matches("[A-Za-z_][A-Za-z0-9_]*") ? field : "\"" + Printable.escape(field) + "\"";
                 problems.add((path.isEmpty() ? shown : path + "." + shown) + " is not used here"
                         + (nearest == null ? "" : "; did you mean " + nearest + "?")
                         + " (fields used here: " + String.join(", ", known) + ")");
@@ -99,7 +107,7 @@ final class FieldReader {
             return fallback;
         }
         if (!v.isBoolean()) {
-            problems.add(name(field) + " must be true or false; got " + v);
+            problems.add(name(field) + " must be true or false; got " + shown(v));
             return fallback;
         }
         return v.asBoolean();
@@ -164,10 +172,16 @@ final class FieldReader {
             return fallback;
         }
         if (!v.isNumber()) {
-            problems.add(name(field) + " must be a number " + range(min, max, openMin, unit) + "; got " + v);
+            problems.add(name(field) + " must be a number " + range(min, max, openMin, unit) + "; got " + shown(v));
             return fallback;
         }
         double x = v.asDouble();
+        if (x != 0 && Math.abs(x) < Double.MIN_NORMAL) {
+            // a subnormal number has lost its precision, and products of it underflow to zero further on
+            problems.add(name(field) + " " + format(x) + " is too small to compute with (below "
+                    + format(Double.MIN_NORMAL) + "); check its unit: it must be " + range(min, max, openMin, unit));
+            return fallback;
+        }
         boolean below = openMin ? !(x > min) : !(x >= min);
         if (below || !(x <= max)) {
             problems.add(name(field) + " must be " + range(min, max, openMin, unit) + "; got " + format(x));
@@ -187,16 +201,42 @@ final class FieldReader {
             }
             return fallback;
         }
-        if (!v.isIntegralNumber() && !(v.isNumber() && v.asDouble() == Math.rint(v.asDouble()))) {
-            problems.add(name(field) + " must be " + range + "; got " + v);
+        if (!v.isIntegralNumber() && !(v.isNumber() && Double.isFinite(v.asDouble())
+                && v.asDouble() == Math.rint(v.asDouble()))) {
+            problems.add(name(field) + " must be " + range + "; got " + shown(v));
             return fallback;
         }
-        long x = v.asLong();
-        if (x < min || x > max) {
-            problems.add(name(field) + " must be " + range + "; got " + x);
+        // compared exactly, before any conversion: a long would wrap 2^64 + 512 to 512 and clamp 1e30
+        java.math.BigDecimal exact = v.decimalValue();
+        if (exact.compareTo(java.math.BigDecimal.valueOf(min)) < 0
+                || exact.compareTo(java.math.BigDecimal.valueOf(max)) > 0) {
+            problems.add(name(field) + " must be " + range + "; got " + shown(v));
+            return fallback;
+        }
+        return exact.longValueExact();
+    }
+
+    /**
+     * A number strictly between min and max, or the default when absent and not required: for quantities whose
+     * formulas fail at both ends (a slope of 1 is a vertical bed).
+     */
+    double openNumber(String field, String unit, double min, double max, double fallback, boolean required) {
+        double x = number(field, unit, min, Double.POSITIVE_INFINITY, true, fallback, required);
+        if (node.hasNonNull(field) && x == x && !(x < max)) {
+            problems.add(name(field) + " must be between " + format(min) + " and " + format(max)
+                    + " (both exclusive) " + unit + "; got " + format(x));
             return fallback;
         }
         return x;
+    }
+
+    /** A JSON value as it may be shown in a message: long values shortened, control characters escaped. */
+    static String shown(JsonNode v) {
+        String s = v.toString();
+        if (s.length() > 60) {
+            s = s.substring(0, 57) + "...";
+        }
+        return Printable.escape(s);
     }
 
     /** A string, or the default when absent and not required. */
@@ -210,7 +250,7 @@ final class FieldReader {
             return fallback;
         }
         if (!v.isTextual()) {
-            problems.add(name(field) + " must be a text in quotes; got " + v);
+            problems.add(name(field) + " must be a text in quotes; got " + shown(v));
             return fallback;
         }
         return v.asText();
@@ -223,7 +263,8 @@ final class FieldReader {
             return fallback;
         }
         if (!allowed.contains(s)) {
-            problems.add(name(field) + " must be one of " + String.join(", ", allowed) + "; got \"" + s + "\"");
+            problems.add(name(field) + " must be one of " + String.join(", ", allowed) + "; got \""
+                    + Printable.escape(s.length() > 60 ? s.substring(0, 57) + "..." : s) + "\"");
             return fallback;
         }
         return s;

@@ -5,6 +5,8 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.core.StreamReadFeature;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -29,16 +31,22 @@ public final class ScenarioReader {
     /** The most particles a scenario may ask for. */
     public static final int MAX_PARTICLES = 50_000_000;
 
-    private static final ObjectMapper MAPPER = new ObjectMapper()
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
+    // strict: a key given twice is refused (it would otherwise silently take its last value)
+    private static final ObjectMapper MAPPER = JsonMapper.builder()
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            .build();
 
     private ScenarioReader() {
     }
 
-    /** Reads a scenario file. */
+    /**
+     * Reads a scenario file: UTF-8 text (a byte-order mark is accepted); another encoding, a binary file or a
+     * folder is refused with what it is named.
+     */
     public static Scenario read(Path file) throws IOException {
         Path folder = file.toAbsolutePath().getParent();
-        return parse(Files.readString(file, StandardCharsets.UTF_8), folder == null ? Path.of("") : folder);
+        return parse(TextFiles.readUtf8(file, "scenario file"), folder == null ? Path.of("") : folder);
     }
 
     /** Parses and validates scenario text; relative record paths are resolved against the working folder. */
@@ -49,9 +57,16 @@ public final class ScenarioReader {
     /** Parses and validates scenario text; relative record paths are resolved against {@code folder}. */
     public static Scenario parse(String json, Path folder) {
         JsonNode root;
+        if (json.startsWith("\uFEFF")) {
+            json = json.substring(1);
+        }
         try {
             root = MAPPER.readTree(json);
         } catch (JsonProcessingException e) {
+            String duplicate = DuplicateKeys.describe(e);
+            if (duplicate != null) {
+                throw new ScenarioException(duplicate);
+            }
             JsonLocation at = e.getLocation();
             String where = at == null ? "" : String.format(Locale.ROOT, "line %d, column %d: ", at.getLineNr(),
                     at.getColumnNr());
@@ -62,6 +77,7 @@ public final class ScenarioReader {
         }
         List<String> problems = new ArrayList<>();
         FieldReader top = FieldReader.root(root, problems);
+        Applicability.check(root, problems);
         int version = (int) top.integer("version", 1, Integer.MAX_VALUE, Scenario.FORMAT_VERSION, true);
         if (version > Scenario.FORMAT_VERSION) {
             problems.add("version " + version + " is newer than this program reads (" + Scenario.FORMAT_VERSION
@@ -89,13 +105,20 @@ public final class ScenarioReader {
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
-        return new Scenario(version, name, description, flow, substance, release, forecast, simulation);
+        Scenario scenario = new Scenario(version, name, description, flow, substance, release, forecast, simulation);
+        List<String> placement = ReleasePlacement.problems(scenario);
+        if (!placement.isEmpty()) {
+            throw new ScenarioException(placement);
+        }
+        return scenario;
     }
 
     private static FlowSpec readFlow(FieldReader f, Path folder) {
         String kind = f.choice("kind", List.of("direct", "tank", "channel", "measured", "shear", "cellular",
                 "beltrami"), null, true);
         if (kind == null) {
+            // the kind is missing or wrong (already reported): its other fields cannot be judged
+            f.acceptAll();
             return null;
         }
         switch (kind) {
@@ -163,7 +186,8 @@ public final class ScenarioReader {
             } else {
                 double eta = s.number("kolmogorovLength", "m", 0, 1e3, true, Double.NaN, true);
                 if (eta > 0 && length > 0 && length / eta < org.eddycast.field.PopeModelSpectrum.MIN_RATIO) {
-                    s.problem(s.name("kolmogorovLength") + " must be at most integralLength / 15 = "
+                    s.problem(s.name("kolmogorovLength") + " must be at most integralLength / "
+                            + FieldReader.format(org.eddycast.field.PopeModelSpectrum.MIN_RATIO) + " = "
                             + FieldReader.format(length / org.eddycast.field.PopeModelSpectrum.MIN_RATIO) + " m for the model spectrum; got "
                             + FieldReader.format(eta));
                 }
@@ -253,9 +277,9 @@ public final class ScenarioReader {
         } else {
             u = survey.discharge() / survey.area();
         }
-        Double slope = f.has("bedSlope") ? f.number("bedSlope", "m/m", 0, 1, true, 1e-3, true) : null;
+        Double slope = f.has("bedSlope") ? f.openNumber("bedSlope", "m/m", 0, 1, 1e-3, true) : null;
         Double shear = f.has("shearVelocity") ? f.number("shearVelocity", "m/s", 0, 100, true, 0.05, true) : null;
-        Double manning = f.has("manningN") ? f.number("manningN", "s/m^(1/3)", 0, 1, true, 0.03, true) : null;
+        Double manning = f.has("manningN") ? f.openNumber("manningN", "s/m^(1/3)", 0, 1, 0.03, true) : null;
         Double nu = f.has("kinematicViscosity")
                 ? f.number("kinematicViscosity", "m^2/s", 0, 1, true, 1e-6, true) : null;
         int given = (slope != null ? 1 : 0) + (shear != null ? 1 : 0) + (manning != null ? 1 : 0);
@@ -372,13 +396,19 @@ public final class ScenarioReader {
         Integrator integrator = Integrator.fromKey(s.choice("integrator", keys, "strang", false));
         double dt = s.number("timeStep", "s", 0, 1e9, true, Double.NaN, false);
         double duration = s.number("duration", "s", 0, 1e12, true, Double.NaN, false);
-        if (dt > 0 && duration > 0 && duration / dt < 2) {
-            s.problem(s.name("duration") + " must be at least two time steps (" + FieldReader.format(2 * dt)
-                    + " s); got " + FieldReader.format(duration));
+        if (dt > 0 && duration > 0 && !(duration / dt >= SimulationSettings.MIN_STEPS - 0.5)) {
+            s.problem(s.name("duration") + " must be at least " + SimulationSettings.MIN_STEPS + " time steps ("
+                    + FieldReader.format(SimulationSettings.MIN_STEPS * dt) + " s); got " + FieldReader.format(duration));
         }
-        if (dt > 0 && duration > 0 && duration / dt > 1e8) {
-            s.problem(s.name("timeStep") + " gives " + FieldReader.format(duration / dt)
-                    + " steps; at most 1e8 are allowed: raise the time step or shorten the duration");
+        if (dt > 0 && duration > 0 && duration / dt > SimulationSettings.MAX_STEPS + 0.5) {
+            s.problem(s.name("timeStep") + " gives " + FieldReader.format(duration / dt) + " steps; at most "
+                    + FieldReader.format(SimulationSettings.MAX_STEPS) + " are allowed: raise the time step or shorten "
+                    + "the duration");
+        }
+        if (group > particles) {
+            s.problem(s.name("groupSize") + " must be at most simulation.particles (" + particles + "): the particles "
+                    + "would be raised to whole groups, " + 2L * org.eddycast.particles.EnsembleRunner.blockSizeFor(group)
+                    + " at least; got " + group);
         }
         long seed = s.integer("seed", Long.MIN_VALUE, Long.MAX_VALUE, 1, false);
         double target = s.number("precisionTarget", "(fraction)", 0, 0.5, true, Double.NaN, false);

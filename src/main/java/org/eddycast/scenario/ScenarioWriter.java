@@ -46,7 +46,7 @@ public final class ScenarioWriter {
             substance.put("name", s.substance().name());
         }
         substance.put("molecularDiffusivity", s.substance().molecularDiffusivity());
-        release(root.putObject("release"), s.release());
+        release(root.putObject("release"), s.release(), s.flow());
         ObjectNode forecast = root.putObject("forecast");
         optional(forecast, "horizon", s.forecast().horizon());
         forecast.put("widthMeasure", s.forecast().widthMeasure());
@@ -147,11 +147,14 @@ public final class ScenarioWriter {
         }
     }
 
-    private static void release(ObjectNode n, Release r) {
+    /** The release's fields that apply to the flow (see {@link Applicability}): the reader refuses the others. */
+    private static void release(ObjectNode n, Release r, FlowSpec flow) {
         n.put("mass", r.mass());
-        optional(n, "rate", r.rate());
-        n.put("location", r.atBank() ? "bank" : "centre-line");
-        if (r.position() != null) {
+        if (flow instanceof ChannelFlow) {
+            optional(n, "rate", r.rate());
+            n.put("location", r.atBank() ? "bank" : "centre-line");
+        }
+        if (r.position() != null && flow instanceof TankFlow) {
             ObjectNode p = n.putObject("position");
             p.put("x", r.position()[0]);
             p.put("y", r.position()[1]);

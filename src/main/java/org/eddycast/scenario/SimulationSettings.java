@@ -24,8 +24,13 @@ public record SimulationSettings(int particles, int groupSize, int modes, Integr
         return !Double.isNaN(precisionTarget);
     }
 
-    /** Number of time steps (duration over time step, rounded). */
-    public int steps() {
-        return (int) Math.round(duration / timeStep);
+    /** The fewest time steps a run may have: the estimator's two windows [T/4, T/2] and [T/2, T] need records. */
+    public static final long MIN_STEPS = 16;
+    /** The most time steps a run may have. */
+    public static final long MAX_STEPS = 100_000_000L;
+
+    /** Number of time steps (duration over time step, rounded), in 64 bits; NaN settings give 0. */
+    public long steps() {
+        return Math.round(duration / timeStep);
     }
 }

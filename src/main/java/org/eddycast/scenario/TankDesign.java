@@ -34,26 +34,26 @@ public record TankDesign(double tankDiameter, double liquidHeight, double impell
     public static final double WATER_20C_KINEMATIC_VISCOSITY = 1.0034e-6;
 
     public TankDesign {
-        DesignChecks.positive("tank.tankDiameter", tankDiameter, "m");
-        DesignChecks.positive("tank.liquidHeight", liquidHeight, "m");
-        DesignChecks.openRange("tank.impellerDiameter", impellerDiameter, 0, tankDiameter, "m");
-        DesignChecks.positive("tank.impellerSpeed", impellerSpeed, "rev/s");
+        DesignChecks.positive("flow.tankDiameter", tankDiameter, "m");
+        DesignChecks.positive("flow.liquidHeight", liquidHeight, "m");
+        DesignChecks.openRange("flow.impellerDiameter", impellerDiameter, 0, tankDiameter, "m");
+        DesignChecks.positive("flow.impellerSpeed", impellerSpeed, "rev/s");
         if (powerNumber != null) {
-            DesignChecks.positive("tank.powerNumber", powerNumber, "(dimensionless)");
+            DesignChecks.positive("flow.powerNumber", powerNumber, "(dimensionless)");
         } else if (impellerType == null) {
-            throw new IllegalArgumentException("tank.powerNumber or tank.impellerType must be given");
+            throw new IllegalArgumentException("flow.powerNumber or flow.impellerType must be given");
         }
         if (kinematicViscosity == null) {
             kinematicViscosity = WATER_20C_KINEMATIC_VISCOSITY;
         }
-        DesignChecks.positive("tank.kinematicViscosity", kinematicViscosity, "m^2/s");
+        DesignChecks.positive("flow.kinematicViscosity", kinematicViscosity, "m^2/s");
         if (pumpingNumber != null) {
-            DesignChecks.positive("tank.pumpingNumber", pumpingNumber, "(dimensionless)");
+            DesignChecks.positive("flow.pumpingNumber", pumpingNumber, "(dimensionless)");
         } else if (impellerType == null) {
-            throw new IllegalArgumentException("tank.pumpingNumber or tank.impellerType must be given");
+            throw new IllegalArgumentException("flow.pumpingNumber or flow.impellerType must be given");
         }
         if (clearance != null) {
-            DesignChecks.openRange("tank.clearance", clearance, 0, liquidHeight, "m");
+            DesignChecks.openRange("flow.clearance", clearance, 0, liquidHeight, "m");
         }
     }
 

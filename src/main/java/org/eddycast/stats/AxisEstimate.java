@@ -12,6 +12,20 @@ package org.eddycast.stats;
 public record AxisEstimate(int axis, SlopeEstimate diffusivity, double lagrangianTimeScale, boolean settled,
                            SlopeEstimate earlyWindow) {
 
+    /**
+     * True when the estimate is a diffusivity at all: a finite, positive number. A negative or undefined slope
+     * (a short run, few particles, a shear with nothing to spread) is noise; outputs then say "not determined"
+     * and never print it as a result.
+     */
+    public boolean determined() {
+        return Double.isFinite(diffusivity.value()) && diffusivity.value() > 0;
+    }
+
+    /** True when the Lagrangian time scale is a finite, positive number of seconds. */
+    public boolean timeScaleDetermined() {
+        return Double.isFinite(lagrangianTimeScale) && lagrangianTimeScale > 0;
+    }
+
     /** "x", "y" or "z". */
     public String axisName() {
         return switch (axis) {

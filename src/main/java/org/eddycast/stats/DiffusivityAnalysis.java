@@ -57,6 +57,20 @@ public final class DiffusivityAnalysis {
             double tl = var > 0 ? (late.value() - d0[a]) / var : Double.NaN;
             boolean settled = !(Math.abs(diff.value()) > 3 * diff.standardError()
                     && Math.abs(diff.value()) > 0.01 * Math.abs(late.value()));
+            if (!(late.value() > 0) || !Double.isFinite(late.value())) {
+                // no cloud shrinks: a slope that is not positive is noise, not a diffusivity
+                warnings.add(String.format(Locale.ROOT, "the %s diffusivity is not determined: the late-window "
+                        + "slope came out %.4g, not a positive number, so the estimate is noise; run more particles "
+                        + "or longer (at least %.4g s)", axisName(a), late.value(), timeUnit * 2 * end));
+                settled = false;
+                tl = Double.NaN;
+            } else if (var > 0 && !(tl > 0)) {
+                warnings.add(String.format(Locale.ROOT, "the %s Lagrangian time scale is not determined: the "
+                        + "turbulent part of the diffusivity, D - D0, came out %.3g times D0, not positive, so it is "
+                        + "lost in the estimate's noise (molecular diffusion dominates at a small Peclet number)",
+                        axisName(a), (late.value() - d0[a]) / d0[a]));
+                tl = Double.NaN;
+            }
             if (Double.isFinite(tl)) {
                 longestTl = Math.max(longestTl, tl);
             }

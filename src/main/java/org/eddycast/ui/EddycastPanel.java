@@ -363,6 +363,7 @@ public final class EddycastPanel implements ToolPanel {
         keepAction.setEnabled(false);
         progress.setValue(0);
         progress.setString("Starting\u2026");
+        results.showPreflight(List.of());
         results.showRunning("Running \"" + c.scenario().name() + "\"\u2026");
         host.showStatus("Running " + c.scenario().name());
         worker = new StudyWorker(runner, c.scenario(), threads, this::progressed, this::finished);
@@ -372,6 +373,11 @@ public final class EddycastPanel implements ToolPanel {
     private void progressed(StudyWorker.Progress p) {
         if (worker == null) {
             return;
+        }
+        if (!p.preflight().isEmpty()) {
+            results.showPreflight(p.preflight());
+            host.showStatus("Before the run: WARNING: " + p.preflight().get(0)
+                    + (p.preflight().size() > 1 ? " (and " + (p.preflight().size() - 1) + " more)" : ""));
         }
         progress.setValue((int) Math.round(1000 * p.fraction()));
         String left = Double.isNaN(p.secondsLeft()) ? "estimating time left" : "about " + duration(p.secondsLeft())
@@ -397,6 +403,7 @@ public final class EddycastPanel implements ToolPanel {
         worker = null;
         w.stop();
         unlock();
+        results.showPreflight(List.of());
         progress.setValue(0);
         progress.setString("Cancelled");
         if (lastResult != null) {

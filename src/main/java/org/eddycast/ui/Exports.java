@@ -130,11 +130,28 @@ final class Exports {
     }
 
     private void guarded(Path p, Io io) {
+        StudyResult r = result.get();
+        if (r != null && r.scenario().flow() instanceof org.eddycast.scenario.MeasuredFlow m
+                && sameFile(p, m.resolved())) {
+            // an export must never replace the record the result was analysed from
+            dialogs.tell("Not written", p + " is the velocity record this result was analysed from; choose "
+                    + "another file.");
+            return;
+        }
         try {
             io.run();
             host.showStatus("Written " + p);
         } catch (IOException | RuntimeException e) {
             dialogs.tell("Could not write " + p.getFileName(), String.valueOf(e.getMessage()));
+        }
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize())
+                    || (java.nio.file.Files.exists(a) && java.nio.file.Files.isSameFile(a, b));
+        } catch (IOException e) {
+            return false;
         }
     }
 

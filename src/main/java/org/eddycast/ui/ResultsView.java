@@ -50,6 +50,9 @@ final class ResultsView extends JPanel {
     private final JTable resultsTable = new JTable(table);
     private final JTextArea reasoning = new JTextArea();
     private final JLabel banner = new JLabel(" ");
+    /** The preflight warnings of the run (wrapped at a fixed width so a long one cannot widen the panel). */
+    private final JLabel preflight = new JLabel();
+    private List<String> preflightWarnings = List.of();
     private final OptionsView options = new OptionsView();
     private ChartSpec spreadSpec;
     private ChartSpec settlingSpec;
@@ -60,7 +63,14 @@ final class ResultsView extends JPanel {
         super(new BorderLayout());
         banner.putClientProperty("FlatLaf.styleClass", "medium");
         banner.setBorder(javax.swing.BorderFactory.createEmptyBorder(6, 10, 6, 10));
-        add(banner, BorderLayout.NORTH);
+        preflight.setName("preflight");
+        preflight.setForeground(javax.swing.UIManager.getColor("Component.warning.focusedBorderColor"));
+        preflight.setBorder(javax.swing.BorderFactory.createEmptyBorder(0, 10, 6, 10));
+        preflight.setVisible(false);
+        JPanel north = new JPanel(new BorderLayout());
+        north.add(banner, BorderLayout.NORTH);
+        north.add(preflight, BorderLayout.CENTER);
+        add(north, BorderLayout.NORTH);
         resultsTable.setName("results");
         resultsTable.setFillsViewportHeight(true);
         reasoning.setEditable(false);
@@ -136,6 +146,22 @@ final class ResultsView extends JPanel {
             rows.add(row);
         }
         return rows;
+    }
+
+    /** Shows the warnings given before the run (an empty list hides them). */
+    void showPreflight(List<String> warnings) {
+        preflightWarnings = List.copyOf(warnings);
+        StringBuilder html = new StringBuilder("<html><body style='width: 560px'>");
+        for (String w : preflightWarnings) {
+            html.append("Before the run: ").append(w.replace("&", "&amp;").replace("<", "&lt;")).append("<br>");
+        }
+        preflight.setText(html.append("</body></html>").toString());
+        preflight.setVisible(!preflightWarnings.isEmpty());
+    }
+
+    /** The preflight warnings shown (for tests). */
+    List<String> preflightShown() {
+        return preflight.isVisible() ? preflightWarnings : List.of();
     }
 
     /** The banner's text (for tests). */

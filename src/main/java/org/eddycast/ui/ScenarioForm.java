@@ -243,7 +243,7 @@ public final class ScenarioForm extends JPanel {
         return fallback;
     }
 
-    /** The visible field a reader message names: the longest path it contains (design checks say "tank."). */
+    /** The visible field a reader message names: the longest path it contains (design checks say "flow."). */
     private FieldRow rowNamedIn(String problem) {
         FieldRow best = null;
         for (FieldRow row : rows) {
@@ -287,6 +287,15 @@ public final class ScenarioForm extends JPanel {
         }
         ObjectNode flow = (ObjectNode) tree.get("flow");
         flow.put("kind", kind);
+        if (tree.get("release") instanceof ObjectNode release) {
+            // the reader refuses a release field of another route: it goes with the route it belonged to
+            if (!kind.equals("channel")) {
+                release.remove(List.of("location", "rate"));
+            }
+            if (!kind.equals("tank")) {
+                release.remove("position");
+            }
+        }
         for (FieldRow row : rows) {
             if (!row.visible()) {
                 continue;

@@ -17,8 +17,12 @@ import org.eddycast.scenario.Scenario;
  */
 final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
 
-    /** A progress report: fraction done, seconds elapsed and left, and the curves so far (or null). */
-    record Progress(double fraction, double elapsedSeconds, double secondsLeft, SpreadCurves curves) {
+    /**
+     * A progress report: fraction done, seconds elapsed and left, the curves so far (or null), and the preflight
+     * warnings ({@link Engine#preflight}, sent once before the run starts; empty otherwise).
+     */
+    record Progress(double fraction, double elapsedSeconds, double secondsLeft, SpreadCurves curves,
+                    List<String> preflight) {
     }
 
     /** What runs a scenario: the engine, or a stand-in in tests. */
@@ -58,10 +62,13 @@ final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
     protected StudyResult doInBackground() {
         long start = System.nanoTime();
         Scales scales = Engine.dimensionlessCase(scenario).scales();
+        // shown before the run, off the event thread (a measured flow reads its record for it)
+        publish(new Progress(0, 0, Double.NaN, null, Engine.preflight(scenario)));
         return runner.run(scenario, threads, (fraction, partial) -> {
             double elapsed = (System.nanoTime() - start) * 1e-9;
             double left = fraction > 0.02 ? elapsed * (1 - fraction) / fraction : Double.NaN;
-            publish(new Progress(fraction, elapsed, left, partial == null ? null : SpreadCurves.of(partial, scales)));
+            publish(new Progress(fraction, elapsed, left, partial == null ? null : SpreadCurves.of(partial, scales),
+                    List.of()));
         }, cancellation);
     }
 
@@ -72,12 +79,17 @@ final class StudyWorker extends SwingWorker<StudyResult, StudyWorker.Progress> {
         }
         Progress latest = chunks.get(chunks.size() - 1);
         SpreadCurves curves = null;
+        List<String> preflight = List.of();
         for (Progress p : chunks) {
             if (p.curves() != null) {
                 curves = p.curves();
             }
+            if (!p.preflight().isEmpty()) {
+                preflight = p.preflight();
+            }
         }
-        onProgress.accept(new Progress(latest.fraction(), latest.elapsedSeconds(), latest.secondsLeft(), curves));
+        onProgress.accept(new Progress(latest.fraction(), latest.elapsedSeconds(), latest.secondsLeft(), curves,
+                preflight));
     }
 
     @Override

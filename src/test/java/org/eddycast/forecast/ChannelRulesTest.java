@@ -93,11 +93,11 @@ class ChannelRulesTest {
     void badDesignNamesTheFieldTheUnitAndTheRange() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new ChannelDesign(1.0, 10.0, 0.5, 1e-4, 0.05, null, null));
-        assertEquals("channel: give exactly one of bedSlope (m/m), shearVelocity (m/s) or manningN (s/m^(1/3));"
+        assertEquals("flow: give exactly one of bedSlope (m/m), shearVelocity (m/s) or manningN (s/m^(1/3));"
                 + " got 2", e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> ChannelDesign.withBedSlope(-1.0, 10.0, 0.5, 1e-4));
-        assertEquals("channel.depth must be > 0 m; got -1", e.getMessage());
+        assertEquals("flow.depth must be > 0 m; got -1", e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> ChannelDesign.withManningN(1.0, 10.0, 0.5, 2.0));
-        assertEquals("channel.manningN must be > 0 and < 1 s/m^(1/3); got 2", e.getMessage());
+        assertEquals("flow.manningN must be > 0 and < 1 s/m^(1/3); got 2", e.getMessage());
     }
 }

@@ -90,16 +90,16 @@ class TankRulesTest {
     void badDesignNamesTheFieldTheUnitAndTheRange() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new TankDesign(1.0, 1.0, 0.3, -2.0, 5.0, null, null, true));
-        assertEquals("tank.impellerSpeed must be > 0 rev/s; got -2", e.getMessage());
+        assertEquals("flow.impellerSpeed must be > 0 rev/s; got -2", e.getMessage());
         e = assertThrows(IllegalArgumentException.class,
                 () -> new TankDesign(1.0, 1.0, 1.2, 2.0, 5.0, null, null, true));
-        assertEquals("tank.impellerDiameter must be > 0 and < 1 m; got 1.2", e.getMessage());
+        assertEquals("flow.impellerDiameter must be > 0 and < 1 m; got 1.2", e.getMessage());
         e = assertThrows(IllegalArgumentException.class,
                 () -> new TankDesign(1.0, 1.0, 0.3, 2.0, null, null, null, true));
-        assertEquals("tank.powerNumber or tank.impellerType must be given", e.getMessage());
+        assertEquals("flow.powerNumber or flow.impellerType must be given", e.getMessage());
         e = assertThrows(IllegalArgumentException.class,
                 () -> new TankDesign(Double.NaN, 1.0, 0.3, 2.0, 5.0, null, null, true));
-        assertEquals("tank.tankDiameter must be > 0 m; got NaN", e.getMessage());
+        assertEquals("flow.tankDiameter must be > 0 m; got NaN", e.getMessage());
     }
 
     static Map<String, Derivation> byQuantity(TurbulenceStatistics s) {

@@ -57,6 +57,24 @@ class AtomicFilesFaultTest {
     }
 
     @Test
+    void theShutdownHookRemovesTheTemporaryFileOfASaveInProgress() throws IOException {
+        // Ctrl-C while a file is written runs the shutdown hooks while the write is still in its content: the
+        // hook's body must leave no .part file, and the previous file as it was
+        Path file = existingScenario();
+        byte[] before = Files.readAllBytes(file);
+        List<List<Path>> during = new java.util.ArrayList<>();
+        assertThrows(IOException.class, () -> AtomicFiles.write(file, out -> {
+            out.write(new byte[] {'{'});
+            assertTrue(filesIn(folder).stream().anyMatch(p -> p.toString().endsWith(".part")));
+            AtomicFiles.removeUnfinished();
+            during.add(filesIn(folder));
+        }));
+        assertEquals(List.of(file), during.get(0), "a .part file outlived the shutdown hook");
+        assertArrayEquals(before, Files.readAllBytes(file));
+        assertEquals(List.of(file), filesIn(folder));
+    }
+
+    @Test
     void aFullDiskGivesAMessageNamingTheFileAndWhatToDo() throws IOException {
         Path file = existingScenario();
         byte[] before = Files.readAllBytes(file);

@@ -32,7 +32,7 @@ class ScenarioReaderTest {
         assertEquals(16, f.spectrum().wavenumberRatio());
         assertEquals(1e-9, s.substance().molecularDiffusivity());
         assertEquals(Integrator.STRANG, s.simulation().integrator());
-        assertEquals(2400, s.simulation().steps());
+        assertEquals(2400L, s.simulation().steps());
         assertEquals(7, s.simulation().seed());
     }
 
