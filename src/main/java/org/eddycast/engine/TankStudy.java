@@ -14,8 +14,6 @@ import org.eddycast.transport.TankTransport;
 /** Sets up and runs the transport stage for a modeled stirred tank. */
 final class TankStudy {
 
-    /** Particles the tank stage follows. */
-    static final int PARTICLES = 32768;
     /** The probes' radius over the tank diameter. */
     static final double PROBE_RADIUS = 0.1;
 
@@ -85,7 +83,7 @@ final class TankStudy {
         double n = tank.impellerSpeed();
         TankStage.Request q = new TankStage.Request(model, feed, names, probes, PROBE_RADIUS,
                 tank.impellerDiameter() / length, Double.isNaN(s.forecast().horizon()) ? 0
-                : s.forecast().horizon() * n, PARTICLES, s.simulation().seed(), length, 1 / n);
+                : s.forecast().horizon() * n, TransportStudy.tankParticles(s), s.simulation().seed(), length, 1 / n);
         return TankStage.run(q, TankFlowRules.discharge(tank, nq), TankFlowRules.velocityGradient(tank, po),
                 threads, progress, cancel);
     }

@@ -20,8 +20,18 @@ import org.eddycast.transport.TransportResult;
  */
 final class TransportStudy {
 
-    /** Particles the channel stage follows. */
-    static final int CHANNEL_PARTICLES = 8192;
+    /**
+     * Particles the channel stage follows: half the scenario's particles, from 1,024 to 65,536 (8,192 for the
+     * default 16,384).
+     */
+    static int channelParticles(Scenario s) {
+        return Math.max(1024, Math.min(65536, s.simulation().particles() / 2));
+    }
+
+    /** Particles the tank stage follows: twice the scenario's particles, from 2,048 to 262,144. */
+    static int tankParticles(Scenario s) {
+        return Math.max(2048, Math.min(262144, 2 * s.simulation().particles()));
+    }
 
     private TransportStudy() {
     }
@@ -53,7 +63,7 @@ final class TransportStudy {
             ChannelStage.Request q = new ChannelStage.Request(ch.section(), ch.meanVelocity(),
                     ChannelRules.shearVelocity(ch).value(), profiles, f[1], s.substance().molecularDiffusivity(),
                     s.release().atBank(), Double.isNaN(s.forecast().horizon()) ? 0 : s.forecast().horizon(),
-                    CHANNEL_PARTICLES, s.simulation().seed());
+                    channelParticles(s), s.simulation().seed());
             return ChannelStage.run(q, threads, progress, cancel);
         }
         if (s.flow() instanceof TankFlow t) {

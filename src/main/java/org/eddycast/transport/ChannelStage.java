@@ -20,10 +20,13 @@ public final class ChannelStage {
     /** Strips across and layers over the depth of the cells that judge mixing. */
     static final int STRIPS = 16;
     static final int LAYERS = 8;
-    /** Record times per run. */
+    /** Uniform record times per run, and geometric ones before the first of them. */
     static final int RECORDS = 240;
+    static final int EARLY_RECORDS = 40;
     /** Time steps per vertical mixing time h^2 / K_z. */
     static final double STEPS_PER_DEPTH_TIME = 1000;
+    /** The most time steps a run takes; a section that mixes more slowly is followed that far and said so. */
+    static final long MAX_STEPS = 60_000;
 
     private ChannelStage() {
     }
@@ -65,13 +68,22 @@ public final class ChannelStage {
         double widthTime = w * w / ky;
         double duration = Math.max(Math.max(widthTime, 3 * depthTime), q.minDuration());
         double dt = depthTime / STEPS_PER_DEPTH_TIME;
+        List<String> warnings = new ArrayList<>();
+        if (duration / dt > MAX_STEPS) {
+            warnings.add(String.format(Locale.ROOT, "the section mixes slowly: mixing across the width takes about"
+                    + " %.3g s (W^2/K_y), but the run stops at %.3g s (%d steps); the distance to mixed across the"
+                    + " width, where given, is extrapolated, and the longitudinal dispersion coefficient is that of a"
+                    + " cloud not yet mixed across", widthTime, MAX_STEPS * dt, MAX_STEPS));
+            duration = MAX_STEPS * dt;
+        }
         long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
         int recordEvery = (int) Math.max(1, steps / RECORDS);
         steps = (long) recordEvery * RECORDS;
         dt = duration / steps;
         int blocks = 32;
         int blockSize = Math.max(16, (q.particles() + blocks * 16 - 1) / (blocks * 16) * 16);
-        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps, recordEvery, q.seed());
+        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps,
+                TransportSettings.mixedRecords(steps, EARLY_RECORDS, RECORDS), q.seed());
         double[] times = settings.recordTimes();
         CloudMoments moments = new CloudMoments(q.meanVelocity(), times, blocks);
         SectionCells cells = new SectionCells(model, STRIPS, LAYERS);
@@ -103,7 +115,6 @@ public final class ChannelStage {
         double combined = Math.sqrt(mc * mc + f * f) * slope.value();
         Estimate longitudinal = new Estimate(slope.value(), slope.value() - combined, slope.value() + combined,
                 "half the late slope of the along-flow variance; interval over blocks and the field factor's");
-        List<String> warnings = new ArrayList<>();
         if (drift.low() > 0.05 || drift.high() < -0.05) {
             warnings.add(String.format(Locale.ROOT, "the longitudinal dispersion coefficient was still changing"
                     + " (%+.0f%% between the halves of the late window): the cloud may not have reached the"

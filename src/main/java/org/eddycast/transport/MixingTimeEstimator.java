@@ -120,9 +120,16 @@ public final class MixingTimeEstimator {
         for (int j = 0; j < records; j++) {
             r[j] = record(counts, j, omit);
         }
-        // The pattern's ratio of largest to rms deviation, read at the last record still far above the noise.
+        // The pattern's ratio of largest to rms deviation, read at the last record still far above the noise;
+        // for two cells (a probe and the rest) it is fixed by their shares.
         double ratio = Double.NaN;
-        for (int j = 0; j < records; j++) {
+        CellMap map = counts.map();
+        if (map.cells() == 2) {
+            double small = Math.min(map.share(0), map.share(1));
+            ratio = Math.sqrt((1 - small) / small);
+        }
+        boolean fixed = Double.isFinite(ratio);
+        for (int j = 0; j < records && !fixed; j++) {
             if (r[j][0] > 10 * RESOLVED * r[j][1] && Math.sqrt(r[j][0]) < LATE_COV) {
                 ratio = Math.sqrt(Math.max(r[j][2], 0) / r[j][0]);
             }

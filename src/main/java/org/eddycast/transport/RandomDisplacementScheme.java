@@ -61,7 +61,7 @@ public final class RandomDisplacementScheme {
             p[1] = yi + half * gy;
             p[2] = zi + half * gz;
             model.reflect(p);
-            model.evaluate(p[0], p[1], p[2], e);
+            model.diffusivity(p[0], p[1], p[2], e);
             int n = 3 * i;
             double sx = Math.sqrt(2 * e[3] * dt) * normals[n] + gx * dt;
             double sy = Math.sqrt(2 * e[4] * dt) * normals[n + 1] + gy * dt;
@@ -70,7 +70,7 @@ public final class RandomDisplacementScheme {
             p[1] = yi + uy * dt + sy;
             p[2] = zi + uz * dt + sz;
             model.reflect(p);
-            model.evaluate(p[0], p[1], p[2], e);
+            model.velocity(p[0], p[1], p[2], e);
             p[0] = xi + half * (ux + e[0]) + sx;
             p[1] = yi + half * (uy + e[1]) + sy;
             p[2] = zi + half * (uz + e[2]) + sz;

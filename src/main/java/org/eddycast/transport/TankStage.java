@@ -22,6 +22,8 @@ public final class TankStage {
     static final int LAYERS = 6;
     /** Record times per run. */
     static final int RECORDS = 240;
+    /** The most time steps a run takes. */
+    static final long MAX_STEPS = 60_000;
 
     private TankStage() {
     }
@@ -57,13 +59,21 @@ public final class TankStage {
         double dt = 0.05;
         double kMax = model.maxDiffusivity();
         dt = Math.min(dt, Math.pow(0.05 * q.impellerDiameter(), 2) / (2 * kMax));
+        List<String> warnings = new ArrayList<>();
+        if (duration / dt > MAX_STEPS) {
+            warnings.add(String.format(Locale.ROOT, "the tank mixes slowly: the run stops at %d steps (%.3g"
+                    + " revolutions); blend times beyond it are extrapolated or not determined", MAX_STEPS,
+                    MAX_STEPS * dt));
+            duration = MAX_STEPS * dt;
+        }
         long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
         int recordEvery = (int) Math.max(1, steps / RECORDS);
         steps = (long) recordEvery * RECORDS;
         dt = duration / steps;
         int blocks = 32;
         int blockSize = Math.max(16, (q.particles() + blocks * 16 - 1) / (blocks * 16) * 16);
-        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps, recordEvery, q.seed());
+        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps,
+                TransportSettings.mixedRecords(steps, 30, RECORDS), q.seed());
         double[] times = settings.recordTimes();
         CellCounts cells = new CellCounts(new TankCells(model.radius(), model.height(), RINGS, SECTORS, LAYERS),
                 blocks, settings.records());
@@ -98,13 +108,21 @@ public final class TankStage {
             double share = c.map().share(0);
             double[][] reading = probeReading(c, share);
             List<Estimate> levels = new ArrayList<>();
+            double noise = 1 / Math.sqrt(settings.particles() * share);
             for (double level : TankStageResult.LEVELS) {
-                levels.add(MixingTimeEstimator.time(c, times, level));
+                Estimate e = MixingTimeEstimator.time(c, times, level);
+                // a probe's own reading decides only while it stands clear of its counting noise
+                if (e.determined() && !e.note().isEmpty()) {
+                    e = Estimate.undetermined(String.format(Locale.ROOT, "the probe holds about %.0f particles, so"
+                            + " its reading carries +-%.0f%% of counting noise and cannot be read to %.0f%%; the"
+                            + " whole-tank blend time stands for it", settings.particles() * share, 100 * noise,
+                            100 * (1 - level)));
+                }
+                levels.add(e);
             }
             probes.add(new TankStageResult.Probe(q.probeNames().get(i), q.probes().get(i), q.probeRadius(),
                     reading[0], reading[1], reading[2], levels));
         }
-        List<String> warnings = new ArrayList<>();
         for (int i = 0; i < TankStageResult.LEVELS.length; i++) {
             Estimate e = blend.get(i);
             if (!e.determined()) {

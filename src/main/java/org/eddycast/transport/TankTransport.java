@@ -91,13 +91,18 @@ public final class TankTransport implements TransportModel {
     }
 
     private double radialZone(double r) {
-        double s = Math.pow(r / zoneRadius, SMOOTHING);
-        return 1 / (1 + s);
+        return 1 / (1 + eighth(r / zoneRadius));
     }
 
     private double verticalZone(double z) {
-        double s = Math.pow((z - clearance) / zoneHalfHeight, SMOOTHING);
-        return 1 / (1 + s);
+        return 1 / (1 + eighth((z - clearance) / zoneHalfHeight));
+    }
+
+    /** x^8 by three multiplications ({@value #SMOOTHING} is the exponent). */
+    private static double eighth(double x) {
+        double x2 = x * x;
+        double x4 = x2 * x2;
+        return x4 * x4;
     }
 
     private double zone(double r, double z) {
@@ -123,14 +128,6 @@ public final class TankTransport implements TransportModel {
                 : -Math.sin(Math.PI * (z - clearance) / (height - clearance));
     }
 
-    private double gPrime(double z) {
-        if (!radial) {
-            return Math.PI / height * Math.cos(Math.PI * z / height);
-        }
-        return z < clearance ? Math.PI / clearance * Math.cos(Math.PI * z / clearance)
-                : -Math.PI / (height - clearance) * Math.cos(Math.PI * (z - clearance) / (height - clearance));
-    }
-
     /** The stream function psi(r, z) (m^3/s over 2 pi). */
     public double streamFunction(double r, double z) {
         return amplitude * r * r * (1 - r * r / (radius * radius)) * g(z);
@@ -138,24 +135,18 @@ public final class TankTransport implements TransportModel {
 
     @Override
     public void evaluate(double x, double y, double z, double[] out) {
-        double r2 = x * x + y * y;
-        double inv = 1 / (radius * radius);
-        // u_r / r = -A (1 - r^2/R^2) g'(z); u_z = A f'(r) / r g(z) = 2 A (1 - 2 r^2 / R^2) g(z)
-        double radialOverR = -amplitude * (1 - r2 * inv) * gPrime(z);
-        double r = Math.sqrt(r2);
+        velocity(x, y, z, out);
+        double r = Math.sqrt(x * x + y * y);
         double rz = radialZone(r);
         double vz = verticalZone(z);
-        double omega = zoneAngularVelocity * rz * vz;
-        out[0] = radialOverR * x - omega * y;
-        out[1] = radialOverR * y + omega * x;
-        out[2] = 2 * amplitude * (1 - 2 * r2 * inv) * g(z);
         double eps = bulkDissipation + zoneDissipation * rz * vz;
-        double k = molecular + diffusivityScale * Math.cbrt(eps);
+        double root = Math.cbrt(eps);
+        double k = molecular + diffusivityScale * root;
         out[3] = k;
         out[4] = k;
         out[5] = k;
         // dK/deps = (1/3) scale eps^(-2/3); d(zone)/dx = rz' (x / r) vz with rz' / r = -8 r^6 / rz^8 rz^2
-        double dk = diffusivityScale / (3 * Math.cbrt(eps * eps)) * zoneDissipation;
+        double dk = diffusivityScale / (3 * root * root) * zoneDissipation;
         double q = r / zoneRadius;
         double q2 = q * q;
         double q6 = q2 * q2 * q2;
@@ -167,6 +158,42 @@ public final class TankTransport implements TransportModel {
         out[6] = dk * dRadialOverR * x * vz;
         out[7] = dk * dRadialOverR * y * vz;
         out[8] = dk * rz * dVertical;
+    }
+
+    @Override
+    public void velocity(double x, double y, double z, double[] out) {
+        double r2 = x * x + y * y;
+        double inv = 1 / (radius * radius);
+        double g;
+        double gPrime;
+        if (!radial) {
+            double a = Math.PI * z / height;
+            g = Math.sin(a);
+            gPrime = Math.PI / height * Math.cos(a);
+        } else if (z < clearance) {
+            double a = Math.PI * z / clearance;
+            g = Math.sin(a);
+            gPrime = Math.PI / clearance * Math.cos(a);
+        } else {
+            double a = Math.PI * (z - clearance) / (height - clearance);
+            g = -Math.sin(a);
+            gPrime = -Math.PI / (height - clearance) * Math.cos(a);
+        }
+        // u_r / r = -A (1 - r^2/R^2) g'(z); u_z = A f'(r) / r g(z) = 2 A (1 - 2 r^2 / R^2) g(z)
+        double radialOverR = -amplitude * (1 - r2 * inv) * gPrime;
+        double omega = zoneAngularVelocity * radialZone(Math.sqrt(r2)) * verticalZone(z);
+        out[0] = radialOverR * x - omega * y;
+        out[1] = radialOverR * y + omega * x;
+        out[2] = 2 * amplitude * (1 - 2 * r2 * inv) * g;
+    }
+
+    @Override
+    public void diffusivity(double x, double y, double z, double[] out) {
+        double eps = bulkDissipation + zoneDissipation * radialZone(Math.sqrt(x * x + y * y)) * verticalZone(z);
+        double k = molecular + diffusivityScale * Math.cbrt(eps);
+        out[3] = k;
+        out[4] = k;
+        out[5] = k;
     }
 
     @Override

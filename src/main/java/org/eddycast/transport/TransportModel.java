@@ -19,6 +19,16 @@ public interface TransportModel {
      */
     void evaluate(double x, double y, double z, double[] out);
 
+    /** Writes the mean velocity alone into {@code out[0..2]} (the rest of out may be overwritten). */
+    default void velocity(double x, double y, double z, double[] out) {
+        evaluate(x, y, z, out);
+    }
+
+    /** Writes the diffusivity's diagonal alone into {@code out[3..5]} (the rest of out may be overwritten). */
+    default void diffusivity(double x, double y, double z, double[] out) {
+        evaluate(x, y, z, out);
+    }
+
     /** Maps a point that has left the region back inside it by mirror reflection at the walls, in place. */
     void reflect(double[] point);
 

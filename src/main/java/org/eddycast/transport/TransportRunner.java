@@ -84,13 +84,14 @@ public final class TransportRunner {
         RandomDisplacementScheme scheme = new RandomDisplacementScheme(model, settings.timeStep());
         int record = 0;
         long steps = settings.steps();
+        long[] recordSteps = settings.recordSteps();
         for (long s = 1; s <= steps; s++) {
             if (cancel.isCancelled()) {
                 throw new RunCancelledException();
             }
             stream.fill(normals, normals.length);
             scheme.step(x, y, z, n, normals);
-            if (s == settings.stepOfRecord(record)) {
+            if (s == recordSteps[record]) {
                 if (!Double.isFinite(x[0] + y[0] + z[0])) {
                     throw new NumericalBlowupException("transport positions stopped being finite at step " + s
                             + ": the transport time step is too large for the flow");

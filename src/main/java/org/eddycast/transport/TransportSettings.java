@@ -7,10 +7,47 @@ package org.eddycast.transport;
  * @param blockSize   particles per block, a positive multiple of 16
  * @param timeStep    time step (s)
  * @param steps       time steps, at least 1
- * @param recordEvery steps between record times (the last step is always a record time)
+ * @param recordSteps the steps after which the recorders look at the particles, increasing, from 1 to steps
  * @param seed        the run's seed; the same seed gives the same answer on any number of threads
  */
-public record TransportSettings(int blocks, int blockSize, double timeStep, long steps, int recordEvery, long seed) {
+public record TransportSettings(int blocks, int blockSize, double timeStep, long steps, long[] recordSteps,
+                                long seed) {
+
+    /** Record times every {@code recordEvery} steps (and at the last step). */
+    public TransportSettings(int blocks, int blockSize, double timeStep, long steps, int recordEvery, long seed) {
+        this(blocks, blockSize, timeStep, steps, uniform(steps, recordEvery), seed);
+    }
+
+    private static long[] uniform(long steps, int recordEvery) {
+        if (steps < 1 || recordEvery < 1) {
+            throw new IllegalArgumentException("transport steps and record interval must be at least 1; got "
+                    + steps + " and " + recordEvery);
+        }
+        int n = (int) ((steps + recordEvery - 1) / recordEvery);
+        long[] r = new long[n];
+        for (int j = 0; j < n; j++) {
+            r[j] = Math.min(steps, (long) (j + 1) * recordEvery);
+        }
+        return r;
+    }
+
+    /**
+     * Record times dense early (a geometric sequence from the first step, to follow a cloud still small beside
+     * the section) and uniform late (for the late-window slope): about {@code early + late} records.
+     */
+    public static long[] mixedRecords(long steps, int early, int late) {
+        java.util.TreeSet<Long> set = new java.util.TreeSet<>();
+        for (int j = 1; j <= late; j++) {
+            set.add(Math.max(1, Math.round((double) j * steps / late)));
+        }
+        double ratio = Math.pow(steps / (double) late, 1.0 / early);
+        double s = 1;
+        while (s < (double) steps / late) {
+            set.add(Math.round(s));
+            s = Math.max(s * ratio, s + 1);
+        }
+        return set.stream().mapToLong(Long::longValue).toArray();
+    }
 
     /** The most particle-steps one run may take (about ten minutes on two cores). */
     public static final double MAX_PARTICLE_STEPS = 1e11;
@@ -26,9 +63,15 @@ public record TransportSettings(int blocks, int blockSize, double timeStep, long
         if (!(timeStep > 0) || !Double.isFinite(timeStep)) {
             throw new IllegalArgumentException("transport time step must be positive and finite; got " + timeStep);
         }
-        if (steps < 1 || recordEvery < 1) {
-            throw new IllegalArgumentException("transport steps and record interval must be at least 1; got "
-                    + steps + " and " + recordEvery);
+        recordSteps = recordSteps.clone();
+        if (steps < 1 || recordSteps.length == 0 || recordSteps[recordSteps.length - 1] != steps) {
+            throw new IllegalArgumentException("transport record steps must end at the last step " + steps);
+        }
+        for (int j = 0; j < recordSteps.length; j++) {
+            if (recordSteps[j] < 1 || (j > 0 && recordSteps[j] <= recordSteps[j - 1])) {
+                throw new IllegalArgumentException("transport record steps must increase from 1; got "
+                        + recordSteps[j] + " at " + j);
+            }
         }
         if ((double) blocks * blockSize * steps > MAX_PARTICLE_STEPS) {
             throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
@@ -43,14 +86,19 @@ public record TransportSettings(int blocks, int blockSize, double timeStep, long
         return (long) blocks * blockSize;
     }
 
+    @Override
+    public long[] recordSteps() {
+        return recordSteps.clone();
+    }
+
     /** Number of record times. */
     public int records() {
-        return (int) ((steps + recordEvery - 1) / recordEvery);
+        return recordSteps.length;
     }
 
     /** The step of record j (1-based steps; the last record is the last step). */
     public long stepOfRecord(int j) {
-        return Math.min(steps, (long) (j + 1) * recordEvery);
+        return recordSteps[j];
     }
 
     /** Record times (s). */

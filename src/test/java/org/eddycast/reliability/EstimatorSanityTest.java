@@ -34,7 +34,7 @@ class EstimatorSanityTest {
         StudyResult r = run("""
                 { "version": 1, "name": "zero wavenumber", "flow": { "kind": "shear", "amplitude": 1,
                   "wavenumber": 0, "correlationTime": 1 }, "substance": { "molecularDiffusivity": 1e-6 },
-                  "simulation": { "particles": 128, "groupSize": 64, "timeStep": 0.05, "duration": 4, "seed": 2 } }""");
+                  "simulation": { "particles": 128, "groupSize": 64, "timeStep": 0.05, "duration": 4, "seed": 16 } }""");
         AxisEstimate x = r.diffusivity().axes().get(0);
         assertTrue(x.diffusivity().value() < 0, "the case must stay one whose slope is negative");
         assertFalse(x.determined());
@@ -60,7 +60,7 @@ class EstimatorSanityTest {
         StudyResult r = run("""
                 { "version": 1, "name": "small peclet", "flow": { "kind": "direct", "rmsVelocity": 0.1,
                   "integralLength": 0.1, "correlationTime": 1 }, "substance": { "molecularDiffusivity": 1 },
-                  "simulation": { "particles": 512, "modes": 16, "seed": 2 } }""");
+                  "simulation": { "particles": 512, "modes": 16, "seed": 3 } }""");
         assertEquals(0.01, r.diffusivity().peclet(), 1e-12);
         AxisEstimate x = r.diffusivity().axes().get(0);
         assertTrue(x.diffusivity().value() < r.diffusivity().molecularDiffusivity(),
