@@ -28,9 +28,12 @@ final class TransportStudy {
         return Math.max(1024, Math.min(65536, s.simulation().particles() / 2));
     }
 
-    /** Particles the tank stage follows: twice the scenario's particles, from 2,048 to 262,144. */
+    /**
+     * Particles the tank stage follows: twice the scenario's particles, from 16,384 (fewer leave too few in each of
+     * the tank's cells to read a 5% deviation from) to 262,144.
+     */
     static int tankParticles(Scenario s) {
-        return Math.max(2048, Math.min(262144, 2 * s.simulation().particles()));
+        return Math.max(16384, Math.min(262144, 2 * s.simulation().particles()));
     }
 
     private TransportStudy() {

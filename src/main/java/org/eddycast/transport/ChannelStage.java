@@ -126,7 +126,7 @@ public final class ChannelStage {
         CellCounts over = counts.grouped(cells.overDepth(), k -> k % LAYERS);
         Estimate mixedWidth = MixingTimeEstimator.time(across, times, 0.95);
         Estimate mixedDepth = MixingTimeEstimator.time(over, times, 0.95);
-        double[] peak = MixingTimeEstimator.peakFactor(counts);
+        double[] peak = MixingTimeEstimator.peakFactor(counts, times);
         List<String> notes = new ArrayList<>();
         notes.add(String.format(Locale.ROOT, "transport stage: %d particles in %d blocks, %d steps of %.3g s over"
                         + " %.4g s; vertical mixing time h^2/K_z = %.3g s, across the width W^2/K_y = %.3g s",

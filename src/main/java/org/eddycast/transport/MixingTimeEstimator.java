@@ -48,31 +48,28 @@ public final class MixingTimeEstimator {
 
     /**
      * The largest concentration over the cells over the region's mean at each record: 1 plus the largest
-     * noise-corrected deviation of a cell above its share.
+     * noise-corrected deviation of a cell above its share while the deviation stands far above the counting
+     * noise, and 1 plus r CoV once it does not (r the late pattern's ratio of largest to rms deviation), because
+     * the largest of many noisy cells is biased upwards.
      */
-    public static double[] peakFactor(CellCounts counts) {
-        double[] peak = new double[counts.records()];
-        CellMap map = counts.map();
-        for (int j = 0; j < peak.length; j++) {
-            double n = 0;
-            double[] c = new double[map.cells()];
-            for (int b = 0; b < counts.blocks(); b++) {
-                for (int k = 0; k < c.length; k++) {
-                    c[k] += counts.count(b, j, k);
-                }
+    public static double[] peakFactor(CellCounts counts, double[] times) {
+        int records = counts.records();
+        double[][] r = new double[records][];
+        for (int j = 0; j < records; j++) {
+            r[j] = record(counts, j, -1);
+        }
+        double ratio = Double.NaN;
+        for (int j = 0; j < records; j++) {
+            if (r[j][0] > 10 * RESOLVED * r[j][1] && Math.sqrt(r[j][0]) < LATE_COV) {
+                ratio = Math.sqrt(Math.max(r[j][2], 0) / r[j][0]);
             }
-            for (double v : c) {
-                n += v;
-            }
-            double max = 0;
-            for (int k = 0; k < c.length; k++) {
-                double f = map.share(k);
-                double dev = c[k] / (n * f) - 1;
-                if (dev > 0) {
-                    max = Math.max(max, Math.sqrt(Math.max(0, dev * dev - (1 - f) / (n * f))));
-                }
-            }
-            peak[j] = 1 + max;
+        }
+        double[] fit = lateDecay(r, times);
+        double[] peak = new double[records];
+        for (int j = 0; j < records; j++) {
+            boolean clear = r[j][0] > 10 * RESOLVED * r[j][1];
+            double cov = fit == null ? Math.sqrt(Math.max(r[j][0], 0)) : Math.exp(fit[0] + fit[1] * times[j]);
+            peak[j] = 1 + (clear || !Double.isFinite(ratio) ? Math.sqrt(Math.max(r[j][2], 0)) : ratio * cov);
         }
         return peak;
     }
@@ -166,6 +163,21 @@ public final class MixingTimeEstimator {
 
     /** Fits ln CoV = a - lambda t over the resolved late records and solves for the threshold. */
     private static Crossing extrapolated(double[][] r, double[] times, double threshold) {
+        double[] fit = lateDecay(r, times);
+        if (fit == null) {
+            return new Crossing(Double.NaN, "not determined: too few resolved records late in the run");
+        }
+        if (!(fit[1] < 0)) {
+            return new Crossing(Double.NaN, "not determined: the deviation was not decaying late in the run");
+        }
+        double t = (Math.log(threshold) - fit[0]) / fit[1];
+        String note = t > times[times.length - 1] ? "extrapolated beyond the run from the late exponential decay"
+                : "from the late exponential decay (the deviation fell into the counting noise)";
+        return new Crossing(t, note);
+    }
+
+    /** {intercept, slope} of ln CoV against t over the resolved late records, or null with fewer than three. */
+    private static double[] lateDecay(double[][] r, double[] times) {
         double st = 0;
         double sy = 0;
         double stt = 0;
@@ -185,16 +197,10 @@ public final class MixingTimeEstimator {
             }
         }
         if (n < 3) {
-            return new Crossing(Double.NaN, "not determined: too few resolved records late in the run");
+            return null;
         }
         double slope = (n * sty - st * sy) / (n * stt - st * st);
         double intercept = (sy - slope * st) / n;
-        if (!(slope < 0)) {
-            return new Crossing(Double.NaN, "not determined: the deviation was not decaying late in the run");
-        }
-        double t = (Math.log(threshold) - intercept) / slope;
-        String note = t > times[times.length - 1] ? "extrapolated beyond the run from the late exponential decay"
-                : "from the late exponential decay (the deviation fell into the counting noise)";
-        return new Crossing(t, note);
+        return new double[] {intercept, slope};
     }
 }

@@ -151,7 +151,7 @@ public final class TankStage {
             }
         }
         return new TankStageResult(seconds, MixingTimeEstimator.coefficientOfVariation(cells), variance,
-                MixingTimeEstimator.peakFactor(cells), scaled(blend, ts), scaledProbes(probes, ls, ts),
+                MixingTimeEstimator.peakFactor(cells, times), scaled(blend, ts), scaledProbes(probes, ls, ts),
                 model.loopFlow() * ls * ls * ls / ts, discharge, volume * ls * ls * ls / discharge,
                 model.meanDiffusivity() * ls * ls / ts, velocityGradient, settings.particles(), blocks, steps,
                 dt * ts, elapsed, warnings, notes);
