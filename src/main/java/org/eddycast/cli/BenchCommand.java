@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.eddycast.engine.Benchmark;
+import org.eddycast.engine.TransportBenchmark;
 import org.eddycast.engine.BenchmarkPresets;
 import org.eddycast.particles.Integrator;
 import org.eddycast.particles.KernelChoice;
@@ -111,6 +112,20 @@ final class BenchCommand implements Callable<Integer> {
                     f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
+        int transportParticles = quick ? 4096 : 16384;
+        int transportSteps = quick ? 200 : 1000;
+        out.printf(Locale.ROOT, "transport stage: %d particles x %d steps, median of 3 after a warm-up%n",
+                transportParticles, transportSteps);
+        out.printf(Locale.ROOT, "%-8s %7s %20s %19s %22s %12s%n", "geometry", "threads", "particle-steps/s",
+                "(slowest, fastest)", "per CPU-second", "peak memory");
+        List<TransportBenchmark.Figure> transport = TransportBenchmark.measure(transportParticles, transportSteps,
+                threadCount);
+        for (TransportBenchmark.Figure t : transport) {
+            out.printf(Locale.ROOT, "%-8s %7d %20.3g %19s %22.3g %9.0f MB%n", t.geometry(), t.threads(),
+                    t.particleStepsPerSecond(), String.format(Locale.ROOT, "(%.3g, %.3g)", t.slowest(), t.fastest()),
+                    t.particleStepsPerCpuSecond(), t.peakMemoryBytes() / 1e6);
+        }
+        out.flush();
         Saves saves = new Saves(out);
         saves.save("figures", json, () -> {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
@@ -131,6 +146,18 @@ final class BenchCommand implements Callable<Integer> {
                 d.put("value", f.diffusivity());
                 d.put("low", f.low());
                 d.put("high", f.high());
+            }
+            for (TransportBenchmark.Figure t : transport) {
+                ObjectNode r = results.addObject();
+                r.put("stage", "transport");
+                r.put("geometry", t.geometry());
+                r.put("threads", t.threads());
+                r.put("particleStepsPerSecond", t.particleStepsPerSecond());
+                ObjectNode spread = r.putObject("particleStepsPerSecondRange");
+                spread.put("low", t.slowest());
+                spread.put("high", t.fastest());
+                r.put("particleStepsPerCpuSecond", t.particleStepsPerCpuSecond());
+                r.put("peakMemoryBytes", t.peakMemoryBytes());
             }
             AtomicFiles.writeString(json, mapper.writeValueAsString(root));
         });

@@ -18,12 +18,16 @@ import org.eddycast.scenario.DirectFlow;
 import org.eddycast.scenario.MeasuredFlow;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TankFlow;
+import org.eddycast.transport.TransportResult;
 
 /**
  * The one entry point the panel, the command line and the report share: a scenario in, a study result out.
  * Knows nothing of any user interface.
  */
 public final class Engine {
+
+    /** The share of a staged run's progress bar that the field stage takes. */
+    static final double FIELD_SHARE = 0.3;
 
     private Engine() {
     }
@@ -114,10 +118,18 @@ public final class Engine {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
         List<String> preflight = preflight(s, c);
-        DiffusivityResult r = SimulationCache.shared().run(c, threads, listener, cancel);
+        boolean staged = s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow;
+        double fieldShare = staged ? FIELD_SHARE : 1.0;
+        DiffusivityResult r = SimulationCache.shared().run(c, threads,
+                (fraction, partial) -> listener.progress(fieldShare * fraction, partial), cancel);
         // a forecast from a diffusivity that is not determined (negative, or not a number) would be nonsense
         boolean determined = r.axes().stream().allMatch(AxisEstimate::determined);
-        Forecast forecast = determined ? ForecastBuilder.build(s, flow, r) : null;
-        return new StudyResult(s, flow, r, forecast, ToolVersion.get(), Instant.now(), preflight);
+        if (!determined) {
+            return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null);
+        }
+        TransportResult transport = TransportStudy.run(s, flow, r, threads,
+                fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
+        return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
+                Instant.now(), preflight, transport);
     }
 }

@@ -28,6 +28,9 @@ import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TankDesign;
 import org.eddycast.scenario.TankFlow;
 import org.eddycast.stats.AxisEstimate;
+import org.eddycast.transport.ChannelStageResult;
+import org.eddycast.transport.TankStageResult;
+import org.eddycast.transport.TransportResult;
 
 /**
  * Turns a simulated diffusivity into a forecast in physical units.
@@ -48,7 +51,18 @@ public final class ForecastBuilder {
     private ForecastBuilder() {
     }
 
-    /** The forecast of a study. */
+    /** The forecast of a study with the transport stage's result (null when it had none). */
+    public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
+        if (transport instanceof ChannelStageResult t && s.flow() instanceof ChannelFlow c) {
+            return ChannelForecast.build(s, flow, c.design(), t, measure(s.forecast().widthMeasure()));
+        }
+        if (transport instanceof TankStageResult t && s.flow() instanceof TankFlow k) {
+            return TankForecast.build(s, flow, k.design(), t);
+        }
+        return build(s, flow, r);
+    }
+
+    /** The forecast of a study from the field stage alone (homogeneous turbulence). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r) {
         int axes = r.axes().size();
         double[] d = new double[3];

@@ -5,14 +5,16 @@ import java.util.List;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TurbulenceStatistics;
+import org.eddycast.transport.TransportResult;
 
 /**
  * Everything one scenario produced: the scenario itself, its resolved flow, the diffusivity result, the tool
  * version and when it finished, the forecast in physical units (null when a diffusivity it needs is not
- * determined), and the warnings shown before the run ({@link Engine#preflight}).
+ * determined), the warnings shown before the run ({@link Engine#preflight}), and what the transport stage found
+ * in the real geometry (null for flows given directly or measured).
  */
 public record StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
-                          String toolVersion, Instant finished, List<String> preflight) {
+                          String toolVersion, Instant finished, List<String> preflight, TransportResult transport) {
 
     public StudyResult {
         preflight = List.copyOf(preflight);

@@ -48,9 +48,6 @@ public record ChannelRules(double integralLengthOverDepth, double inertialRangeE
     /** Nezu and Nakagawa's coefficients (streamwise, spanwise, vertical), from memory. */
     public static final double[] INTENSITY_COEFFICIENTS = {2.30, 1.63, 1.27};
 
-    /** Depth-averaging factor sqrt((1 - e^-2) / 2) for an intensity c e^(-y/h). */
-    public static final double DEPTH_AVERAGE_FACTOR = Math.sqrt(-Math.expm1(-2.0) / 2.0);
-
     /** Froude number above which the flow is treated as near critical (common practice). */
     public static final double HIGH_FROUDE = 0.8;
 
@@ -110,29 +107,37 @@ public record ChannelRules(double integralLengthOverDepth, double inertialRangeE
             warnings.add(String.format("the Reynolds number U R / nu = %.3g is below %.0f: the flow may not be"
                     + " turbulent", reynolds, TURBULENT_REYNOLDS));
         }
+        // The field stage answers for the statistics at mid-depth; the transport stage scales its factor
+        // D / (u' L) to every height with the profiles of ChannelProfiles.
+        double zeta = 0.5;
         String[] names = {"streamwise", "spanwise", "vertical"};
         double[] component = new double[3];
-        double sumOfVariances = 0.0;
         for (int i = 0; i < 3; i++) {
-            double c = INTENSITY_COEFFICIENTS[i];
-            component[i] = c * DEPTH_AVERAGE_FACTOR * uStar;
-            sumOfVariances += component[i] * component[i];
-            steps.add(new Derivation(names[i] + " rms velocity (depth average)", component[i], "m/s",
-                    String.format("%.2f u* e^(-y/h), root of the depth-mean variance over 0 < y < h:"
-                            + " %.2f x %.4f u*", c, c, DEPTH_AVERAGE_FACTOR),
-                    Sources.NEZU_NAKAGAWA_1993.cite() + " (from memory; fitted for 0.1 < y/h < 0.9)"));
+            component[i] = ChannelProfiles.rms(i, zeta, uStar);
+            steps.add(new Derivation(names[i] + " rms velocity at mid-depth", component[i], "m/s",
+                    String.format("%.2f u* e^(-z/h) at z/h = 0.5", INTENSITY_COEFFICIENTS[i]),
+                    Sources.NEZU_NAKAGAWA_1993.cite() + " (from memory; fitted for 0.1 < z/h < 0.9)"));
         }
-        double rms = Math.sqrt(sumOfVariances / 3.0);
-        steps.add(new Derivation("rms velocity", rms, "m/s",
-                "u' = sqrt of the mean of the three component variances (isotropic field)", "common practice"));
-        double length = integralLengthOverDepth * h;
-        steps.add(new Derivation("integral length", length, "m",
-                String.format("L = %.3g h", integralLengthOverDepth), "common practice (order of magnitude)"));
+        double rms = ChannelProfiles.RMS_COEFFICIENT * uStar * Math.exp(-zeta);
+        steps.add(new Derivation("rms velocity at mid-depth", rms, "m/s",
+                "u' = root of the mean of the three component variances", "common practice"));
+        double eps = ChannelProfiles.dissipation(zeta, h, uStar);
+        steps.add(new Derivation("dissipation rate at mid-depth", eps, "W/kg",
+                String.format("eps = %.1f (u*^3 / h) (z/h)^(-1/2) e^(-3 z/h); near the bed the log-law"
+                        + " equilibrium u*^3 (1 - z/h) / (kappa z)", ChannelProfiles.OUTER_DISSIPATION),
+                Sources.NEZU_NAKAGAWA_1993.cite() + " (from memory); log-law equilibrium derived"));
+        double length = new ChannelProfiles(TankRules.STANDARD.dissipationConstant(), 1).integralLength(zeta, h,
+                uStar);
+        steps.add(new Derivation("integral length at mid-depth", length, "m",
+                String.format("L = C_eps u'^3 / eps, C_eps = %.2f (the same rule as for tanks); about 0.29 h"
+                        + " (z/h)^(1/2) above z/h = 0.06, kappa z near the bed",
+                        TankRules.STANDARD.dissipationConstant()),
+                Sources.SREENIVASAN_1998.cite() + " (from memory)"));
         double tau = length / rms;
         steps.add(new Derivation("correlation time", tau, "s", "tau = L / u' (eddy-turnover time)",
                 "common practice"));
-        double eps = uStar * uStar * u / radius;
-        steps.add(new Derivation("mean dissipation rate", eps, "W/kg",
+        double meanEps = uStar * uStar * u / radius;
+        steps.add(new Derivation("section-mean dissipation rate", meanEps, "W/kg",
                 "eps = g S U = u*^2 U / R (uniform flow: the work of gravity is all dissipated)",
                 "derived; common practice"));
         SpectrumStep spectrum = SpectrumStep.of(length, nu, eps, inertialRangeEndInKolmogorovLengths, warnings);
@@ -142,8 +147,10 @@ public record ChannelRules(double integralLengthOverDepth, double inertialRangeE
         TurbulenceStatistics statistics = new TurbulenceStatistics(3, rms, component, length, tau, spectrum.spec(),
                 u, eps, steps);
         List<String> assumptions = List.of(
-                "homogeneous isotropic turbulence with depth-averaged intensities",
-                "no mean-shear dispersion: the velocity profile over the depth and width is not modeled",
+                "the random Fourier field gives D / (u' L) for the turbulence at mid-depth; the transport stage"
+                        + " applies it at every height with the local intensities and length",
+                "over the depth: the log-law velocity profile; across the width: the local depth by Manning's"
+                        + " formula, or the surveyed velocities",
                 "straight channel in uniform flow; passive, conservative tracer");
         return new ModeledTurbulence(statistics, warnings, assumptions);
     }

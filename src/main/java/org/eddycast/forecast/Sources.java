@@ -37,4 +37,22 @@ public final class Sources {
             "Power characteristics of mixing impellers", "Chem. Eng. Prog. 46:395 and 467");
     public static final Reference IAPWS_2008 = new Reference("Huber et al.", 2009,
             "New international formulation for the viscosity of H2O", "J. Phys. Chem. Ref. Data 38:101 (IAPWS 2008)");
+    public static final Reference NORWOOD_METZNER_1960 = new Reference("Norwood & Metzner", 1960,
+            "Flow patterns and mixing rates in agitated vessels", "AIChE J. 6:432");
+    public static final Reference CUTTER_1966 = new Reference("Cutter", 1966,
+            "Local mixing rates in stirred tanks", "AIChE J. 12:35");
+    public static final Reference HEMRAJANI_TATTERSON_2004 = new Reference("Hemrajani & Tatterson", 2004,
+            "Mechanically stirred vessels, in Handbook of Industrial Mixing (Paul, Atiemo-Obeng & Kresta, eds.)",
+            "Wiley, ch. 6");
+    public static final Reference CAMP_STEIN_1943 = new Reference("Camp & Stein", 1943,
+            "Velocity gradients and internal work in fluid motion", "J. Boston Soc. Civ. Eng. 30:219");
+    public static final Reference ROUSSINOVA_KRESTA_2008 = new Reference("Roussinova & Kresta", 2008,
+            "Comparison of continuous blend time and residence time distribution models for a stirred tank",
+            "Ind. Eng. Chem. Res. 47:3532");
+    public static final Reference VISSER_1997 = new Reference("Visser", 1997,
+            "Using random walk models to simulate the vertical distribution of particles in a turbulent water"
+                    + " column", "Mar. Ecol. Prog. Ser. 158:275");
+    public static final Reference THOMSON_1987 = new Reference("Thomson", 1987,
+            "Criteria for the selection of stochastic models of particle trajectories in turbulent flows",
+            "J. Fluid Mech. 180:529");
 }

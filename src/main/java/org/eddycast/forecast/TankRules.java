@@ -146,8 +146,8 @@ public record TankRules(double integralLengthOverImpellerDiameter, double dissip
         TurbulenceStatistics statistics = new TurbulenceStatistics(3, rms, new double[] {rms, rms, rms}, length,
                 tau, spectrum.spec(), 0.0, eps, steps);
         List<String> assumptions = List.of(
-                "homogeneous isotropic turbulence at the tank-average dissipation rate",
-                "the impeller's bulk circulation is not modeled; it usually mixes a tank faster than eddies alone",
+                "the random Fourier field gives D / (u' L) for turbulence at the tank-average dissipation rate; the"
+                        + " transport stage applies it at every point with the local dissipation rate",
                 "passive, conservative tracer; walls reflect");
         return new ModeledTurbulence(statistics, warnings, assumptions);
     }

@@ -79,6 +79,9 @@ public final class ResultJson {
         if (study.forecast() != null) {
             forecast(root, study.forecast());
         }
+        if (study.transport() != null) {
+            TransportJson.write(root, study.transport());
+        }
         ArrayNode flowWarnings = root.putArray("flowWarnings");
         study.flow().warnings().forEach(flowWarnings::add);
         return root;
@@ -159,7 +162,7 @@ public final class ResultJson {
         f.cautions().forEach(cautions::add);
     }
 
-    private static void array(ObjectNode node, String field, double[] values) {
+    static void array(ObjectNode node, String field, double[] values) {
         ArrayNode a = node.putArray(field);
         for (double v : values) {
             if (Double.isFinite(v)) {

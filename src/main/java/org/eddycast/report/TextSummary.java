@@ -54,6 +54,9 @@ public final class TextSummary {
                 sb.append("  WARNING (flow): ").append(w).append('\n');
             }
         }
+        if (s.transport() != null) {
+            TransportText.append(sb, s.transport());
+        }
         Forecast f = s.forecast();
         if (f == null) {
             sb.append("  forecast: not determined (a diffusivity it needs is not determined; see the warnings)\n");

@@ -14,9 +14,19 @@ package org.eddycast.scenario;
  * @param shearVelocity      u* (m/s), greater than 0, or null
  * @param manningN           Manning's n (s/m^(1/3)), greater than 0 and less than 1, or null
  * @param kinematicViscosity nu (m^2/s), greater than 0, or null for water at 20 C
+ * @param section            the cross-section's shape; null for a rectangle {@code width} by {@code depth}.
+ *                           For other shapes {@code width} is the surface width and {@code depth} the greatest
+ *                           depth
  */
 public record ChannelDesign(double depth, double width, double meanVelocity, Double bedSlope,
-                            Double shearVelocity, Double manningN, Double kinematicViscosity) {
+                            Double shearVelocity, Double manningN, Double kinematicViscosity,
+                            ChannelSection section) {
+
+    /** A rectangular channel. */
+    public ChannelDesign(double depth, double width, double meanVelocity, Double bedSlope, Double shearVelocity,
+                         Double manningN, Double kinematicViscosity) {
+        this(depth, width, meanVelocity, bedSlope, shearVelocity, manningN, kinematicViscosity, null);
+    }
 
     public ChannelDesign {
         DesignChecks.positive("flow.depth", depth, "m");
@@ -40,6 +50,9 @@ public record ChannelDesign(double depth, double width, double meanVelocity, Dou
             kinematicViscosity = TankDesign.WATER_20C_KINEMATIC_VISCOSITY;
         }
         DesignChecks.positive("flow.kinematicViscosity", kinematicViscosity, "m^2/s");
+        if (section == null) {
+            section = new ChannelSection.Rectangular(width, depth);
+        }
     }
 
     /** A channel described by its bed slope, water at 20 C. */
@@ -58,8 +71,18 @@ public record ChannelDesign(double depth, double width, double meanVelocity, Dou
         return new ChannelDesign(depth, width, meanVelocity, null, null, manningN, null);
     }
 
-    /** Hydraulic radius W h / (W + 2 h) (m) of a rectangular section. */
+    /** Hydraulic radius A / P (m): W h / (W + 2 h) for a rectangle. */
     public double hydraulicRadius() {
-        return width * depth / (width + 2.0 * depth);
+        return section.hydraulicRadius();
+    }
+
+    /** Mean depth A / W (m): the depth for a rectangle. */
+    public double meanDepth() {
+        return section.meanDepth();
+    }
+
+    /** Discharge U A (m^3/s). */
+    public double discharge() {
+        return meanVelocity * section.area();
     }
 }

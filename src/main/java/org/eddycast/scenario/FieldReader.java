@@ -139,6 +139,27 @@ final class FieldReader {
         return new FieldReader(child, name(field), problems);
     }
 
+    /** The objects of an array field, each read by its own reader; empty (with a problem) when not an array. */
+    List<FieldReader> objects(String field) {
+        known.add(field);
+        JsonNode child = node.get(field);
+        List<FieldReader> list = new java.util.ArrayList<>();
+        if (child == null || !child.isArray()) {
+            problems.add(name(field) + " must be a list [ {...}, ... ]");
+            return list;
+        }
+        for (int i = 0; i < child.size(); i++) {
+            JsonNode item = child.get(i);
+            String at = name(field) + "[" + i + "]";
+            if (!item.isObject()) {
+                problems.add(at + " must be an object { ... }");
+                continue;
+            }
+            list.add(new FieldReader(item, at, problems));
+        }
+        return list;
+    }
+
     /** A number in [min, max] (inclusive unless open), or the default when absent and not required. */
     double number(String field, String unit, double min, double max, boolean openMin, double fallback,
                   boolean required) {

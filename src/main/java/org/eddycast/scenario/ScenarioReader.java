@@ -214,6 +214,8 @@ public final class ScenarioReader {
         Double nu = f.has("kinematicViscosity")
                 ? f.number("kinematicViscosity", "m^2/s", 0, 1, true, 1e-6, true) : null;
         boolean baffled = f.bool("baffled", true);
+        Double pumping = f.has("pumpingNumber") ? f.number("pumpingNumber", "", 0, 10, true, 0.7, true) : null;
+        Double clearance = f.has("clearance") ? f.number("clearance", "m", 0, h, true, h / 3, true) : null;
         boolean ok = true;
         if (d >= t) {
             f.problem(f.name("impellerDiameter") + " must be smaller than tankDiameter (" + FieldReader.format(t)
@@ -231,7 +233,7 @@ public final class ScenarioReader {
             return null;
         }
         try {
-            return new TankFlow(new TankDesign(t, h, d, n, po, type, nu, baffled));
+            return new TankFlow(new TankDesign(t, h, d, n, po, type, nu, baffled, pumping, clearance));
         } catch (IllegalArgumentException e) {
             f.problem(e.getMessage());
             return null;
@@ -239,9 +241,42 @@ public final class ScenarioReader {
     }
 
     private static ChannelFlow readChannel(FieldReader f) {
-        double h = f.number("depth", "m", 0, 1e3, true, 1, true);
-        double w = f.number("width", "m", 0, 1e5, true, 10, true);
-        double u = f.number("meanVelocity", "m/s", 0, 100, true, 1, true);
+        FieldReader sec = f.object("section", false);
+        String kind = sec == null ? "rectangular"
+                : sec.choice("kind", List.of("rectangular", "trapezoidal", "surveyed"), "rectangular", true);
+        boolean surveyed = kind.equals("surveyed");
+        ChannelSection.Surveyed survey = null;
+        double sideSlope = Double.NaN;
+        if (surveyed) {
+            survey = readSurvey(sec);
+        } else if (kind.equals("trapezoidal")) {
+            sideSlope = sec.number("sideSlope", "(horizontal per vertical)", 0, 100, true, 1, true);
+        }
+        if (sec != null) {
+            sec.rejectUnknown();
+        }
+        double h = f.number("depth", "m", 0, 1e3, true, survey == null ? 1 : survey.maxDepth(), !surveyed);
+        double w = f.number("width", "m", 0, 1e5, true, survey == null ? 10 : survey.width(), !surveyed);
+        boolean hasDischarge = f.has("discharge");
+        boolean hasVelocity = f.has("meanVelocity");
+        double u = 1;
+        if (hasVelocity && hasDischarge) {
+            f.problem(f.path() + ": give meanVelocity (m/s) or discharge (m^3/s), not both");
+        } else if (hasDischarge) {
+            double q = f.number("discharge", "m^3/s", 0, 1e6, true, 1, true);
+            u = Double.NaN;
+            if (survey != null) {
+                u = q / survey.area();
+            } else if (kind.equals("trapezoidal") && w > 2 * sideSlope * h) {
+                u = q / new ChannelSection.Trapezoidal(w, h, sideSlope).area();
+            } else if (kind.equals("rectangular")) {
+                u = q / (w * h);
+            }
+        } else if (hasVelocity || survey == null) {
+            u = f.number("meanVelocity", "m/s", 0, 100, true, 1, true);
+        } else {
+            u = survey.discharge() / survey.area();
+        }
         Double slope = f.has("bedSlope") ? f.openNumber("bedSlope", "m/m", 0, 1, 1e-3, true) : null;
         Double shear = f.has("shearVelocity") ? f.number("shearVelocity", "m/s", 0, 100, true, 0.05, true) : null;
         Double manning = f.has("manningN") ? f.openNumber("manningN", "s/m^(1/3)", 0, 1, 0.03, true) : null;
@@ -254,9 +289,38 @@ public final class ScenarioReader {
             return null;
         }
         try {
-            return new ChannelFlow(new ChannelDesign(h, w, u, slope, shear, manning, nu));
+            ChannelSection section = switch (kind) {
+                case "trapezoidal" -> new ChannelSection.Trapezoidal(w, h, sideSlope);
+                case "surveyed" -> survey;
+                default -> null;
+            };
+            if (surveyed && survey == null) {
+                return null;
+            }
+            return new ChannelFlow(new ChannelDesign(h, w, u, slope, shear, manning, nu, section));
         } catch (IllegalArgumentException e) {
             f.problem(e.getMessage());
+            return null;
+        }
+    }
+
+    private static ChannelSection.Surveyed readSurvey(FieldReader sec) {
+        List<FieldReader> verticals = sec.objects("verticals");
+        int n = verticals.size();
+        double[] offsets = new double[n];
+        double[] depths = new double[n];
+        double[] velocities = new double[n];
+        for (int i = 0; i < n; i++) {
+            FieldReader v = verticals.get(i);
+            offsets[i] = v.number("offset", "m", 0, 1e5, false, 0, true);
+            depths[i] = v.number("depth", "m", 0, 1e3, false, 0, true);
+            velocities[i] = v.number("velocity", "m/s", 0, 100, false, 0, true);
+            v.rejectUnknown();
+        }
+        try {
+            return new ChannelSection.Surveyed(offsets, depths, velocities);
+        } catch (IllegalArgumentException e) {
+            sec.problem(e.getMessage());
             return null;
         }
     }

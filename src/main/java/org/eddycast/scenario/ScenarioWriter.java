@@ -87,6 +87,12 @@ public final class ScenarioWriter {
             }
             n.put("kinematicViscosity", d.kinematicViscosity());
             n.put("baffled", d.baffled());
+            if (d.pumpingNumber() != null) {
+                n.put("pumpingNumber", d.pumpingNumber());
+            }
+            if (d.clearance() != null) {
+                n.put("clearance", d.clearance());
+            }
         } else if (flow instanceof ChannelFlow c) {
             ChannelDesign d = c.design();
             n.put("depth", d.depth());
@@ -102,6 +108,24 @@ public final class ScenarioWriter {
                 n.put("manningN", d.manningN());
             }
             n.put("kinematicViscosity", d.kinematicViscosity());
+            if (d.section() instanceof ChannelSection.Trapezoidal trapezoid) {
+                ObjectNode sec = n.putObject("section");
+                sec.put("kind", "trapezoidal");
+                sec.put("sideSlope", trapezoid.sideSlope());
+            } else if (d.section() instanceof ChannelSection.Surveyed survey) {
+                ObjectNode sec = n.putObject("section");
+                sec.put("kind", "surveyed");
+                com.fasterxml.jackson.databind.node.ArrayNode list = sec.putArray("verticals");
+                double[] offsets = survey.offsets();
+                double[] depths = survey.depths();
+                double[] velocities = survey.velocities();
+                for (int i = 0; i < offsets.length; i++) {
+                    ObjectNode v = list.addObject();
+                    v.put("offset", offsets[i]);
+                    v.put("depth", depths[i]);
+                    v.put("velocity", velocities[i]);
+                }
+            }
         } else if (flow instanceof MeasuredFlow m) {
             n.put("record", m.record());
             n.put("spectrum", m.modelSpectrum() ? "model" : "power-law");

@@ -16,10 +16,19 @@ package org.eddycast.scenario;
  * @param impellerType       impeller family, or null when the power number is given
  * @param kinematicViscosity nu (m^2/s), greater than 0, or null for water at 20 C
  * @param baffled            true when the tank has wall baffles
+ * @param pumpingNumber      N_Q (-), greater than 0, or null to use the impeller type's typical value
+ * @param clearance          height of the impeller above the bottom (m), between 0 and H, or null for T/3
  */
 public record TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
                          Double powerNumber, ImpellerType impellerType, Double kinematicViscosity,
-                         boolean baffled) {
+                         boolean baffled, Double pumpingNumber, Double clearance) {
+
+    /** A tank with the impeller type's typical pumping number and the impeller at a third of T. */
+    public TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
+                      Double powerNumber, ImpellerType impellerType, Double kinematicViscosity, boolean baffled) {
+        this(tankDiameter, liquidHeight, impellerDiameter, impellerSpeed, powerNumber, impellerType,
+                kinematicViscosity, baffled, null, null);
+    }
 
     /** Kinematic viscosity of water at 20 C and 0.1 MPa (m^2/s): IAPWS 2008 (Huber et al. 2009). */
     public static final double WATER_20C_KINEMATIC_VISCOSITY = 1.0034e-6;
@@ -38,6 +47,19 @@ public record TankDesign(double tankDiameter, double liquidHeight, double impell
             kinematicViscosity = WATER_20C_KINEMATIC_VISCOSITY;
         }
         DesignChecks.positive("flow.kinematicViscosity", kinematicViscosity, "m^2/s");
+        if (pumpingNumber != null) {
+            DesignChecks.positive("flow.pumpingNumber", pumpingNumber, "(dimensionless)");
+        } else if (impellerType == null) {
+            throw new IllegalArgumentException("flow.pumpingNumber or flow.impellerType must be given");
+        }
+        if (clearance != null) {
+            DesignChecks.openRange("flow.clearance", clearance, 0, liquidHeight, "m");
+        }
+    }
+
+    /** Height of the impeller above the bottom (m): as given, else a third of the tank diameter (at most H/2). */
+    public double impellerClearance() {
+        return clearance != null ? clearance : Math.min(tankDiameter / 3, liquidHeight / 2);
     }
 
     /** Liquid volume pi T^2 H / 4 (m^3) of a flat-bottomed cylinder. */

@@ -53,14 +53,22 @@ record PresetClaim(String quantity, double low, double high, String unit) {
         }
         if (q.equals("blend time")) {
             requireUnit("s");
-            return mixing(r, "blend time (");
+            return mixing(r, "blend time 95%");
+        }
+        if (q.equals("longitudinal dispersion coefficient")) {
+            requireUnit("m^2/s");
+            if (!(r.transport() instanceof org.eddycast.transport.ChannelStageResult c)) {
+                throw new IllegalArgumentException("the result has no channel transport stage");
+            }
+            return c.longitudinalDispersion().value();
         }
         if (q.equals("distance to mixed across the width")) {
             requireUnit("m");
             return mixing(r, "distance to mixed across the width (");
         }
         throw new IllegalArgumentException("unknown quantity '" + quantity + "': use mean eddy diffusivity, eddy "
-                + "diffusivity along x|y|z, blend time or distance to mixed across the width");
+                + "diffusivity along x|y|z, blend time, longitudinal dispersion coefficient or distance to mixed across the"
+                + " width");
     }
 
     private void requireUnit(String expected) {

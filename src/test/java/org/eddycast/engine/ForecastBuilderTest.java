@@ -89,23 +89,26 @@ class ForecastBuilderTest {
         Forecast f = r.forecast();
         assertFalse(f.cautions().isEmpty());
         assertTrue(f.cautions().stream().anyMatch(c -> c.contains("licensed professionals")));
-        assertTrue(f.assumptions().stream().anyMatch(a -> a.contains("homogeneous")));
-        assertEquals("blend time (every point within 5% of the final value)", f.mixing().get(0).name());
+        assertTrue(f.assumptions().stream().anyMatch(a -> a.contains("random-displacement model")));
+        assertTrue(f.mixing().stream().anyMatch(m -> m.name().startsWith("blend time 95% (every cell within 5%")),
+                "a 95% blend time among " + f.mixing());
         assertTrue(f.mixing().get(0).low() <= f.mixing().get(0).value());
         assertTrue(f.mixing().get(0).value() <= f.mixing().get(0).high());
         assertEquals(1, f.handbook().size(), "the blend-time correlation beside the simulated blend time");
-        // Peak concentration falls, and tends to the mixed value mass / volume in the closed box.
+        // Peak concentration falls, and tends to the mixed value mass / volume in the closed tank.
         double[] peak = f.peakConcentration();
         assertTrue(peak[0] > peak[peak.length - 1]);
-        double side = 2.0 * Math.sqrt(Math.PI) / 2;
-        double mixed = 0.5 / (side * side * 2.0);
+        double mixed = 0.5 / (Math.PI * 2.0 * 2.0 / 4 * 2.0);
         assertEquals(mixed, peak[peak.length - 1], 0.06 * mixed, "peak at twice the blend time is near mixed");
-        // Widths level off at those of a cloud spread evenly over the box: sigma = L / sqrt(12) per axis.
+        // Widths level off at those of a cloud spread evenly through the cylinder: sigma = R / 2 across (the
+        // variance of one coordinate over a disc is R^2 / 4) and H / sqrt(12) over the height; within 4 sampling
+        // errors of a variance of n particles, 4 sqrt(2 / n) / 2 in sigma
         int last = f.times().length - 1;
-        double[] size = {side, side, 2.0};
+        double[] sigma = {0.5, 0.5, 2.0 / Math.sqrt(12)};
+        double n = ((org.eddycast.transport.TankStageResult) r.transport()).particles();
         for (int a = 0; a < 3; a++) {
-            double uniform = f.widthFactor() * size[a] / Math.sqrt(12);
-            assertEquals(uniform, f.width()[a][last], 0.01 * uniform, "axis " + a + " width once mixed");
+            double uniform = f.widthFactor() * sigma[a];
+            assertEquals(uniform, f.width()[a][last], 2 * Math.sqrt(2 / n) * uniform, "axis " + a + " width once mixed");
         }
     }
 

@@ -1,0 +1,141 @@
+package org.eddycast.transport;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.DoubleConsumer;
+import org.eddycast.forecast.ChannelProfiles;
+import org.eddycast.particles.Cancellation;
+import org.eddycast.scenario.ChannelSection;
+
+/**
+ * The transport stage for a channel: sizes the run from the section's own mixing times, releases a slug at
+ * the surface (on the centre-line or at the left water's edge), follows it until it is mixed over the section
+ * and its along-flow variance grows linearly, and reads off the longitudinal dispersion coefficient, the
+ * section-mean diffusivities, the times to mixed over the depth and across the width, the skewness and the
+ * cloud's widths.
+ */
+public final class ChannelStage {
+
+    /** Strips across and layers over the depth of the cells that judge mixing. */
+    static final int STRIPS = 16;
+    static final int LAYERS = 8;
+    /** Uniform record times per run, and geometric ones before the first of them. */
+    static final int RECORDS = 240;
+    static final int EARLY_RECORDS = 40;
+    /** Time steps per vertical mixing time h^2 / K_z. */
+    static final double STEPS_PER_DEPTH_TIME = 1000;
+    /** The most time steps a run takes; a section that mixes more slowly is followed that far and said so. */
+    static final long MAX_STEPS = 60_000;
+
+    private ChannelStage() {
+    }
+
+    /**
+     * What to run.
+     *
+     * @param section       the cross-section
+     * @param meanVelocity  U (m/s)
+     * @param shearVelocity the section's u* (m/s)
+     * @param profiles      the rules over the depth with the field's factor F
+     * @param fieldFactorRelativeHalfWidth half-width of F's 95% interval over F
+     * @param molecular     molecular diffusivity (m^2/s)
+     * @param atBank        release at the left water's edge instead of the centre-line
+     * @param minDuration   simulate at least this long (s), for example to reach the stations asked about
+     * @param particles     particles to follow (rounded up to 32 blocks of a multiple of 16)
+     * @param seed          the seed
+     */
+    public record Request(ChannelSection section, double meanVelocity, double shearVelocity,
+                          ChannelProfiles profiles, double fieldFactorRelativeHalfWidth, double molecular,
+                          boolean atBank, double minDuration, int particles, long seed) {
+    }
+
+    /** The stage's model for a request. */
+    public static ChannelTransport model(Request q) {
+        return new ChannelTransport(new DesignSectionFlow(q.section(), q.meanVelocity(), q.shearVelocity(),
+                q.profiles(), q.molecular()), q.meanVelocity());
+    }
+
+    /** Runs the stage. */
+    public static ChannelStageResult run(Request q, int threads, DoubleConsumer progress, Cancellation cancel) {
+        long start = System.nanoTime();
+        ChannelTransport model = model(q);
+        double ky = model.sectionMeanDiffusivity(1);
+        double kz = model.sectionMeanDiffusivity(2);
+        double h = q.section().maxDepth();
+        double w = q.section().width();
+        double depthTime = h * h / kz;
+        double widthTime = w * w / ky;
+        double duration = Math.max(Math.max(widthTime, 3 * depthTime), q.minDuration());
+        double dt = depthTime / STEPS_PER_DEPTH_TIME;
+        List<String> warnings = new ArrayList<>();
+        if (duration / dt > MAX_STEPS) {
+            warnings.add(String.format(Locale.ROOT, "the section mixes slowly: mixing across the width takes about"
+                    + " %.3g s (W^2/K_y), but the run stops at %.3g s (%d steps); the distance to mixed across the"
+                    + " width, where given, is extrapolated, and the longitudinal dispersion coefficient is that of a"
+                    + " cloud not yet mixed across", widthTime, MAX_STEPS * dt, MAX_STEPS));
+            duration = MAX_STEPS * dt;
+        }
+        long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
+        int recordEvery = (int) Math.max(1, steps / RECORDS);
+        steps = (long) recordEvery * RECORDS;
+        dt = duration / steps;
+        int blocks = 32;
+        int blockSize = Math.max(16, (q.particles() + blocks * 16 - 1) / (blocks * 16) * 16);
+        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps,
+                TransportSettings.mixedRecords(steps, EARLY_RECORDS, RECORDS), q.seed());
+        double[] times = settings.recordTimes();
+        CloudMoments moments = new CloudMoments(q.meanVelocity(), times, blocks);
+        SectionCells cells = new SectionCells(model, STRIPS, LAYERS);
+        CellCounts counts = new CellCounts(cells, blocks, settings.records());
+        double y0 = q.atBank() ? 0 : 0.5 * w;
+        ReleaseSampler release = (rng, x, y, z, n) -> {
+            for (int i = 0; i < n; i++) {
+                x[i] = 0;
+                y[i] = y0;
+                z[i] = 0;
+            }
+        };
+        TransportRunner.run(model, release, settings, List.of(moments, counts), threads, progress, cancel);
+
+        int records = times.length;
+        double[][] variance = new double[3][records];
+        double[] skewness = new double[records];
+        for (int j = 0; j < records; j++) {
+            for (int a = 0; a < 3; a++) {
+                variance[a][j] = moments.pooledVariance(j, a);
+            }
+            skewness[j] = moments.pooledSkewness(j, 0);
+        }
+        double windowStart = 0.5 * duration;
+        Estimate slope = DispersionEstimator.halfSlope(moments, 0, windowStart, duration);
+        Estimate drift = DispersionEstimator.drift(moments, 0, windowStart, duration);
+        double f = q.fieldFactorRelativeHalfWidth();
+        double mc = slope.relativeHalfWidth();
+        double combined = Math.sqrt(mc * mc + f * f) * slope.value();
+        Estimate longitudinal = new Estimate(slope.value(), slope.value() - combined, slope.value() + combined,
+                "half the late slope of the along-flow variance; interval over blocks and the field factor's");
+        if (drift.low() > 0.05 || drift.high() < -0.05) {
+            warnings.add(String.format(Locale.ROOT, "the longitudinal dispersion coefficient was still changing"
+                    + " (%+.0f%% between the halves of the late window): the cloud may not have reached the"
+                    + " Taylor regime; treat it as approximate", 100 * drift.value()));
+        }
+        Estimate transverse = new Estimate(ky, ky * (1 - f), ky * (1 + f), "section mean of the local rules");
+        Estimate vertical = new Estimate(kz, kz * (1 - f), kz * (1 + f), "section mean of the local rules");
+        CellCounts across = counts.grouped(cells.acrossWidth(), k -> k / LAYERS);
+        CellCounts over = counts.grouped(cells.overDepth(), k -> k % LAYERS);
+        Estimate mixedWidth = MixingTimeEstimator.time(across, times, 0.95);
+        Estimate mixedDepth = MixingTimeEstimator.time(over, times, 0.95);
+        double[] peak = MixingTimeEstimator.peakFactor(counts, times);
+        List<String> notes = new ArrayList<>();
+        notes.add(String.format(Locale.ROOT, "transport stage: %d particles in %d blocks, %d steps of %.3g s over"
+                        + " %.4g s; vertical mixing time h^2/K_z = %.3g s, across the width W^2/K_y = %.3g s",
+                settings.particles(), blocks, steps, dt, duration, depthTime, widthTime));
+        notes.add("release: an instantaneous slug at the surface " + (q.atBank() ? "at the left water's edge"
+                : "on the centre-line"));
+        double elapsed = (System.nanoTime() - start) / 1e9;
+        return new ChannelStageResult(times, variance, skewness, peak, longitudinal, transverse, vertical,
+                mixedWidth, mixedDepth, q.meanVelocity(), q.section().area(), windowStart, settings.particles(),
+                blocks, steps, dt, elapsed, warnings, notes);
+    }
+}
