@@ -115,10 +115,19 @@ public final class Engine {
      * @throws org.eddycast.particles.NumericalBlowupException when the time step is far too large
      */
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel) {
+        return run(s, threads, listener, cancel, true);
+    }
+
+    /**
+     * Runs a scenario, with or without the transport stage of a modeled channel or tank (without it, the forecast
+     * is that of homogeneous turbulence, as for the other routes).
+     */
+    public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel,
+                                  boolean transportStage) {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
         List<String> preflight = preflight(s, c);
-        boolean staged = s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow;
+        boolean staged = transportStage && (s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow);
         double fieldShare = staged ? FIELD_SHARE : 1.0;
         DiffusivityResult r = SimulationCache.shared().run(c, threads,
                 (fraction, partial) -> listener.progress(fieldShare * fraction, partial), cancel);
@@ -127,7 +136,7 @@ public final class Engine {
         if (!determined) {
             return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null);
         }
-        TransportResult transport = TransportStudy.run(s, flow, r, threads,
+        TransportResult transport = !staged ? null : TransportStudy.run(s, flow, r, threads,
                 fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
         return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
                 Instant.now(), preflight, transport);

@@ -27,6 +27,8 @@ public final class ChannelStage {
     static final double STEPS_PER_DEPTH_TIME = 1000;
     /** The most time steps a run takes; a section that mixes more slowly is followed that far and said so. */
     static final long MAX_STEPS = 60_000;
+    /** The most particle-steps a run takes (about half a minute on two cores). */
+    static final double MAX_WORK = 5e8;
 
     private ChannelStage() {
     }
@@ -69,12 +71,14 @@ public final class ChannelStage {
         double duration = Math.max(Math.max(widthTime, 3 * depthTime), q.minDuration());
         double dt = depthTime / STEPS_PER_DEPTH_TIME;
         List<String> warnings = new ArrayList<>();
-        if (duration / dt > MAX_STEPS) {
+        int particles = Math.max(16, (q.particles() + 32 * 16 - 1) / (32 * 16) * 16) * 32;
+        long maxSteps = (long) Math.min(MAX_STEPS, MAX_WORK / particles);
+        if (duration / dt > maxSteps) {
             warnings.add(String.format(Locale.ROOT, "the section mixes slowly: mixing across the width takes about"
                     + " %.3g s (W^2/K_y), but the run stops at %.3g s (%d steps); the distance to mixed across the"
                     + " width, where given, is extrapolated, and the longitudinal dispersion coefficient is that of a"
-                    + " cloud not yet mixed across", widthTime, MAX_STEPS * dt, MAX_STEPS));
-            duration = MAX_STEPS * dt;
+                    + " cloud not yet mixed across", widthTime, maxSteps * dt, maxSteps));
+            duration = maxSteps * dt;
         }
         long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
         int recordEvery = (int) Math.max(1, steps / RECORDS);

@@ -24,6 +24,8 @@ public final class TankStage {
     static final int RECORDS = 240;
     /** The most time steps a run takes. */
     static final long MAX_STEPS = 60_000;
+    /** The most particle-steps a run takes (about half a minute on two cores). */
+    static final double MAX_WORK = 5e8;
 
     private TankStage() {
     }
@@ -60,11 +62,13 @@ public final class TankStage {
         double kMax = model.maxDiffusivity();
         dt = Math.min(dt, Math.pow(0.05 * q.impellerDiameter(), 2) / (2 * kMax));
         List<String> warnings = new ArrayList<>();
-        if (duration / dt > MAX_STEPS) {
+        int particles = Math.max(16, (q.particles() + 32 * 16 - 1) / (32 * 16) * 16) * 32;
+        long maxSteps = (long) Math.min(MAX_STEPS, MAX_WORK / particles);
+        if (duration / dt > maxSteps) {
             warnings.add(String.format(Locale.ROOT, "the tank mixes slowly: the run stops at %d steps (%.3g"
-                    + " revolutions); blend times beyond it are extrapolated or not determined", MAX_STEPS,
-                    MAX_STEPS * dt));
-            duration = MAX_STEPS * dt;
+                    + " revolutions); blend times beyond it are extrapolated or not determined", maxSteps,
+                    maxSteps * dt));
+            duration = maxSteps * dt;
         }
         long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
         int recordEvery = (int) Math.max(1, steps / RECORDS);
