@@ -112,8 +112,9 @@ final class BenchCommand implements Callable<Integer> {
                     f.peakMemoryBytes() / 1e6, f.diffusivity(), f.low(), f.high());
             out.flush();
         });
-        int transportParticles = quick ? 4096 : 16384;
-        int transportSteps = quick ? 200 : 1000;
+        // the transport stage follows the same overrides, so a small run stays small
+        int transportParticles = particles > 0 ? Math.max(512, particles) : quick ? 4096 : 16384;
+        int transportSteps = steps > 0 ? Math.max(4, steps) : quick ? 200 : 1000;
         out.printf(Locale.ROOT, "transport stage: %d particles x %d steps, median of 3 after a warm-up%n",
                 transportParticles, transportSteps);
         out.printf(Locale.ROOT, "%-8s %7s %20s %19s %22s %12s%n", "geometry", "threads", "particle-steps/s",

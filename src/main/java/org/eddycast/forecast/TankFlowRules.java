@@ -36,6 +36,10 @@ public final class TankFlowRules {
         if (design.pumpingNumber() != null) {
             return new Derivation("pumping number", design.pumpingNumber(), "", "N_Q as given", "given");
         }
+        if (design.impellerType() == null) {
+            throw new IllegalArgumentException("flow.pumpingNumber: give the impeller's pumping number N_Q, or"
+                    + " flow.impellerType for its typical value; the tank's circulation needs one");
+        }
         String source = Sources.HEMRAJANI_TATTERSON_2004.cite() + " (from memory)";
         return switch (design.impellerType()) {
             case DISC_TURBINE -> new Derivation("pumping number", 0.75, "", "typical turbulent value, disc turbine",

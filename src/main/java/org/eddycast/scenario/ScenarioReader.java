@@ -222,6 +222,12 @@ public final class ScenarioReader {
                     + " m); got " + FieldReader.format(d));
             ok = false;
         }
+        if (type == null && pumping == null && po != null) {
+            f.problem(f.name("pumpingNumber") + " or " + f.name("impellerType") + " must be given: the tank's"
+                    + " circulation needs the impeller's pumping number N_Q (a number above 0) or its type (one of "
+                    + String.join(", ", types) + ")");
+            ok = false;
+        }
         if (po == null && type == null) {
             if (!f.has("impellerType")) {
                 f.problem(f.name("powerNumber") + " or " + f.name("impellerType") + " must be given (impellerType "

@@ -49,8 +49,6 @@ public record TankDesign(double tankDiameter, double liquidHeight, double impell
         DesignChecks.positive("flow.kinematicViscosity", kinematicViscosity, "m^2/s");
         if (pumpingNumber != null) {
             DesignChecks.positive("flow.pumpingNumber", pumpingNumber, "(dimensionless)");
-        } else if (impellerType == null) {
-            throw new IllegalArgumentException("flow.pumpingNumber or flow.impellerType must be given");
         }
         if (clearance != null) {
             DesignChecks.openRange("flow.clearance", clearance, 0, liquidHeight, "m");

@@ -42,43 +42,47 @@ class ChannelRulesTest {
     }
 
     @Test
-    void nezuNakagawaDepthAveragesByQuadrature() {
-        // Nezu & Nakagawa 1993, Turbulence in Open-Channel Flows (from memory): u'/u* = 2.30 e^(-y/h),
-        // spanwise 1.63 e^(-y/h), vertical 1.27 e^(-y/h). The depth average used is the root of the mean
-        // variance over 0 < y/h < 1, computed here by quadrature: 1.5123, 1.0718, 0.8351 u*.
+    void midDepthStatisticsFollowTheStatedRules() {
+        // The field stage simulates the turbulence at mid-depth, z/h = 0.5: Nezu & Nakagawa 1993, Turbulence in
+        // Open-Channel Flows (from memory): u'/u* = 2.30 e^(-z/h), spanwise 1.63 e^(-z/h), vertical 1.27 e^(-z/h).
         double uStar = 0.06;
-        ChannelDesign design = ChannelDesign.withShearVelocity(1.5, 30.0, 0.8, uStar);
+        double h = 1.5;
+        ChannelDesign design = ChannelDesign.withShearVelocity(h, 30.0, 0.8, uStar);
         TurbulenceStatistics s = ChannelRules.STANDARD.model(design).statistics();
         double[] c = {2.30, 1.63, 1.27};
         double meanVariance = 0.0;
         for (int i = 0; i < 3; i++) {
-            double ci = c[i];
-            double variance = Quadrature.integrate(y -> Math.pow(ci * Math.exp(-y), 2), 0, 1, 4);
-            assertEquals(Math.sqrt(variance) * uStar, s.componentRms()[i], 1e-12);
-            meanVariance += variance / 3.0;
+            assertEquals(c[i] * Math.exp(-0.5) * uStar, s.componentRms()[i], 1e-12);
+            meanVariance += Math.pow(c[i] * Math.exp(-0.5) * uStar, 2) / 3.0;
         }
-        assertEquals(1.5123, s.componentRms()[0] / uStar, 1e-4);
-        // u' of the isotropic field: root of the mean component variance, 1.1737 u*.
-        assertEquals(Math.sqrt(meanVariance) * uStar, s.rmsVelocity(), 1e-12);
-        assertEquals(1.1737, s.rmsVelocity() / uStar, 1e-4);
+        assertEquals(Math.sqrt(meanVariance), s.rmsVelocity(), 1e-12);
+        // Dissipation at mid-depth: the log-law equilibrium u*^3 (1 - z/h) / (kappa z) = 2.4390 u*^3 / h and Nezu &
+        // Nakagawa's 9.8 (z/h)^(-1/2) e^(-3 z/h) u*^3 / h = 3.0921 u*^3 / h, joined as (a^4 + b^4)^(1/4) = 3.3559;
+        // L = C_eps u'^3 / eps with C_eps = 0.5 (Sreenivasan 1998, from memory).
+        double wall = 0.5 / (0.41 * 0.5);
+        double outer = 9.8 * Math.exp(-1.5) / Math.sqrt(0.5);
+        double eps = Math.pow(Math.pow(wall, 4) + Math.pow(outer, 4), 0.25) * uStar * uStar * uStar / h;
+        assertEquals(3.3559, eps * h / Math.pow(uStar, 3), 1e-4);
+        double length = 0.5 * Math.pow(s.rmsVelocity(), 3) / eps;
+        assertEquals(length, s.integralLength(), 1e-12 * length);
+        assertEquals(length / s.rmsVelocity(), s.correlationTime(), 1e-12);
     }
 
     @Test
     void scalesAndDissipationFollowTheStatedRules() {
         ChannelDesign design = ChannelDesign.withShearVelocity(1.5, 30.0, 0.8, 0.06);
         TurbulenceStatistics s = ChannelRules.STANDARD.model(design).statistics();
-        assertEquals(0.75, s.integralLength(), 1e-15);
-        assertEquals(0.75 / s.rmsVelocity(), s.correlationTime(), 1e-15);
         assertEquals(0.8, s.meanVelocity(), 0.0);
-        // Uniform flow: the work of gravity g S U is all dissipated; with u*^2 = g R S, eps = u*^2 U / R.
-        double r = 30.0 * 1.5 / 33.0;
-        assertEquals(0.0036 * 0.8 / r, s.dissipationRate(), 1e-15);
         Map<String, Derivation> steps = TankRulesTest.byQuantity(s);
         for (String q : new String[] {"hydraulic radius", "shear velocity", "Froude number", "Reynolds number",
-                "rms velocity", "integral length", "correlation time", "mean dissipation rate", "Kolmogorov length",
-                "spectrum band ratio", "mean velocity", "dimensions", "kinematic viscosity"}) {
+                "rms velocity at mid-depth", "integral length at mid-depth", "correlation time",
+                "section-mean dissipation rate", "Kolmogorov length", "spectrum band ratio", "mean velocity",
+                "dimensions", "kinematic viscosity"}) {
             assertTrue(steps.containsKey(q), q);
         }
+        // Uniform flow: the work of gravity g S U is all dissipated; with u*^2 = g R S, eps = u*^2 U / R.
+        double r = 30.0 * 1.5 / 33.0;
+        assertEquals(0.0036 * 0.8 / r, steps.get("section-mean dissipation rate").value(), 1e-15);
     }
 
     @Test
