@@ -64,8 +64,10 @@ public final class TankTransport implements TransportModel {
         this.radial = radial;
         double a = impellerDiameter / 2;
         double fa = a * a * (1 - a * a / (radius * radius));
+        // radial: out through the impeller's cylinder; axial: down through its disc (a down-pumping impeller,
+        // so the loop rises at the wall and runs in towards the axis at the surface)
         this.amplitude = radial ? discharge / (4 * Math.PI * fa)
-                : discharge / (2 * Math.PI * fa * Math.sin(Math.PI * clearance / liquidHeight));
+                : -discharge / (2 * Math.PI * fa * Math.sin(Math.PI * clearance / liquidHeight));
         this.zoneRadius = 0.75 * impellerDiameter;
         this.zoneHalfHeight = 0.25 * impellerDiameter;
         double volume = Math.PI * radius * radius * height;
@@ -117,7 +119,7 @@ public final class TankTransport implements TransportModel {
     /** The flow carried round the loop(s): 2 pi times the largest stream function (m^3/s), per loop. */
     public double loopFlow() {
         double f = radius * radius / 4;
-        return 2 * Math.PI * amplitude * f;
+        return 2 * Math.PI * Math.abs(amplitude) * f;
     }
 
     private double g(double z) {

@@ -76,6 +76,7 @@ class TankCirculationTest {
                 + " the pumping number (Hemrajani & Tatterson 2004, Handbook of Industrial Mixing, ch. 6)", 1,
                 Math.abs(flux) / q, 1e-6, "relative, quadrature of u_z over the disc");
         assertTrue(axialOk, "axial flux " + flux + " against " + q);
+        assertTrue(flux < 0, "an axial impeller pumps down through its disc: " + flux);
         // radial: out through the cylinder r = D/2 between the two loops' centres (z = C/2 and the upper centre)
         TankTransport radial = tank(true, d, q);
         double c = 1.0 / 3;
