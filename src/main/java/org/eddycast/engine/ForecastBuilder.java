@@ -53,6 +53,10 @@ public final class ForecastBuilder {
 
     /** The forecast of a study with the transport stage's result (null when it had none). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
+        return StockCap.apply(uncapped(s, flow, r, transport), s.release());
+    }
+
+    private static Forecast uncapped(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
         if (transport instanceof ChannelStageResult t && s.flow() instanceof ChannelFlow c) {
             return ChannelForecast.build(s, flow, c.design(), t, measure(s.forecast().widthMeasure()));
         }

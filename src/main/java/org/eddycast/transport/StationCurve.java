@@ -11,9 +11,11 @@ package org.eddycast.transport;
  * @param low           lower end of its 95% interval (kg/m^3, at least 0)
  * @param high          upper end of its 95% interval (kg/m^3)
  * @param binWidth      the along-flow bin width each record's count was taken over (m)
+ * @param oneParticle   the concentration a single particle in the bin stands for at each record (kg/m^3): the
+ *                      smallest value the curve resolves above zero
  */
 public record StationCurve(double distance, double across, double[] times, double[] concentration, double[] low,
-                           double[] high, double[] binWidth) {
+                           double[] high, double[] binWidth, double[] oneParticle) {
 
     public StationCurve {
         times = times.clone();
@@ -21,6 +23,12 @@ public record StationCurve(double distance, double across, double[] times, doubl
         low = low.clone();
         high = high.clone();
         binWidth = binWidth.clone();
+        oneParticle = oneParticle.clone();
+    }
+
+    @Override
+    public double[] oneParticle() {
+        return oneParticle.clone();
     }
 
     @Override
@@ -58,12 +66,14 @@ public record StationCurve(double distance, double across, double[] times, doubl
         double[] c = concentration.clone();
         double[] l = low.clone();
         double[] h = high.clone();
+        double[] one = oneParticle.clone();
         for (int j = 0; j < c.length; j++) {
             c[j] *= factor;
             l[j] *= factor;
             h[j] *= factor;
+            one[j] *= factor;
         }
-        return new StationCurve(distance, across, times, c, l, h, binWidth);
+        return new StationCurve(distance, across, times, c, l, h, binWidth, one);
     }
 
     /** The same curve with every value held at most at {@code cap} (kg/m^3). */
@@ -76,7 +86,7 @@ public record StationCurve(double distance, double across, double[] times, doubl
             l[j] = Math.min(l[j], cap);
             h[j] = Math.min(h[j], cap);
         }
-        return new StationCurve(distance, across, times, c, l, h, binWidth);
+        return new StationCurve(distance, across, times, c, l, h, binWidth, oneParticle);
     }
 
     /** The largest concentration on the curve (kg/m^3). */

@@ -43,6 +43,11 @@ public final class StationCurves {
             double[] lo = new double[records];
             double[] hi = new double[records];
             double[] bw = new double[records];
+            double[] one = new double[records];
+            long particles = 0;
+            for (int b = 0; b < blocks; b++) {
+                particles += counts.blockSize(b);
+            }
             double[] perBlock = new double[blocks];
             for (int j = 0; j < records; j++) {
                 double sigma = Math.sqrt(Math.max(moments.pooledVariance(j, 0), 0));
@@ -64,8 +69,9 @@ public final class StationCurves {
                 lo[j] = Math.max(0, mean - half);
                 hi[j] = mean + half;
                 bw[j] = bin;
+                one[j] = mass / (area * share) / (particles * bin);
             }
-            out[k] = new StationCurve(counts.distance(k), across[k], times, c, lo, hi, bw);
+            out[k] = new StationCurve(counts.distance(k), across[k], times, c, lo, hi, bw, one);
         }
         return out;
     }

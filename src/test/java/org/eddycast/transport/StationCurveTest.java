@@ -107,7 +107,7 @@ class StationCurveTest {
     void passageReadsCrossingsByInterpolation() {
         double[] t = {1, 2, 3, 4, 5, 6};
         double[] c = {0, 2, 6, 4, 1, 0};
-        StationCurve curve = new StationCurve(10, Double.NaN, t, c, c, c, new double[6]);
+        StationCurve curve = new StationCurve(10, Double.NaN, t, c, c, c, new double[6], new double[6]);
         Passage p = Passage.of(curve, 1.0);
         assertEquals(1.5, p.arrival(), 1e-12);
         assertEquals(3, p.peakTime(), 1e-12);
@@ -117,7 +117,7 @@ class StationCurveTest {
         Passage none = Passage.of(curve, 7.0);
         assertTrue(Double.isNaN(none.arrival()) && Double.isNaN(none.aboveThresholdFor()));
         Passage stillAbove = Passage.of(new StationCurve(10, Double.NaN, t, new double[] {0, 2, 3, 4, 5, 6}, c, c,
-                new double[6]), 1.0);
+                new double[6], new double[6]), 1.0);
         assertTrue(stillAbove.stillAboveAtEnd() && Double.isNaN(stillAbove.fallsBack()));
         assertEquals(6 - 1.5, stillAbove.aboveThresholdFor(), 1e-12);
     }
