@@ -121,7 +121,7 @@ class ForecastBuilderTest {
     void continuousReleaseTendsToTheFullyMixedConcentration() throws Exception {
         String text = Files.readString(Path.of("presets", "lowland-channel-dye.json"))
                 .replaceAll("\"particles\": \\d+", "\"particles\": 1024")
-                .replace("\"mass\": 0.2,", "\"mass\": 0.2, \"rate\": 0.01,");
+                .replaceFirst("\"mass\": [0-9.eE+-]+,", "\"mass\": 0.2, \"rate\": 0.01,");
         StudyResult r = Engine.run(ScenarioReader.parse(text), 2, RunListener.NONE, new Cancellation());
         double[] plume = r.forecast().plumeConcentration();
         assertEquals(r.forecast().grid().length, plume.length);
