@@ -134,11 +134,12 @@ public final class Engine {
         // a forecast from a diffusivity that is not determined (negative, or not a number) would be nonsense
         boolean determined = r.axes().stream().allMatch(AxisEstimate::determined);
         if (!determined) {
-            return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null);
+            return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null,
+                    AnswerBuilder.build(s, r, null));
         }
         TransportResult transport = !staged ? null : TransportStudy.run(s, flow, r, threads,
                 fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
         return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
-                Instant.now(), preflight, transport);
+                Instant.now(), preflight, transport, AnswerBuilder.build(s, r, transport));
     }
 }

@@ -13,6 +13,7 @@ import org.eddycast.forecast.ChannelRules;
 import org.eddycast.forecast.Comparison;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.forecast.ForecastComparison;
+import org.eddycast.forecast.TaylorEstimate;
 import org.eddycast.forecast.FreeAxis;
 import org.eddycast.forecast.HandbookEstimate;
 import org.eddycast.forecast.InstantaneousRelease;
@@ -26,6 +27,7 @@ import org.eddycast.scenario.ForecastSettings;
 import org.eddycast.scenario.Release;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TankDesign;
+import org.eddycast.scenario.TurbulenceStatistics;
 import org.eddycast.scenario.TankFlow;
 import org.eddycast.stats.AxisEstimate;
 import org.eddycast.transport.ChannelStageResult;
@@ -53,6 +55,10 @@ public final class ForecastBuilder {
 
     /** The forecast of a study with the transport stage's result (null when it had none). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
+        return StockCap.apply(uncapped(s, flow, r, transport), s.release());
+    }
+
+    private static Forecast uncapped(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
         if (transport instanceof ChannelStageResult t && s.flow() instanceof ChannelFlow c) {
             return ChannelForecast.build(s, flow, c.design(), t, measure(s.forecast().widthMeasure()));
         }
@@ -180,6 +186,20 @@ public final class ForecastBuilder {
         } else {
             density = (axis, dEff) -> new FreeAxis(0, dEff);
             assumptions.add("unbounded water: no walls, bed or surface within reach of the cloud");
+            TurbulenceStatistics stats = flow.turbulence();
+            if (stats != null && Double.isFinite(stats.correlationTime())) {
+                double mean = 0;
+                double meanLow = 0;
+                double meanHigh = 0;
+                for (AxisEstimate a : r.axes()) {
+                    mean += a.diffusivity().value() / axes;
+                    meanLow += a.diffusivity().low() / axes;
+                    meanHigh += a.diffusivity().high() / axes;
+                }
+                handbook.add(ForecastComparison.compare(mean, Math.max(meanLow, 1e-30), meanHigh,
+                        TaylorEstimate.longTime(stats.rmsVelocity(), stats.correlationTime(),
+                                stats.integralLength(), r.molecularDiffusivity())));
+            }
             if (Double.isNaN(horizon)) {
                 horizon = 10 * r.duration();
             }

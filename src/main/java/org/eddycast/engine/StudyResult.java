@@ -11,13 +11,22 @@ import org.eddycast.transport.TransportResult;
  * Everything one scenario produced: the scenario itself, its resolved flow, the diffusivity result, the tool
  * version and when it finished, the forecast in physical units (null when a diffusivity it needs is not
  * determined), the warnings shown before the run ({@link Engine#preflight}), and what the transport stage found
- * in the real geometry (null for flows given directly or measured).
+ * in the real geometry (null for flows given directly or measured), and the answers the outputs open with
+ * (the headline, the release as taken, the stations and the dose plan).
  */
 public record StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
-                          String toolVersion, Instant finished, List<String> preflight, TransportResult transport) {
+                          String toolVersion, Instant finished, List<String> preflight, TransportResult transport,
+                          Answers answers) {
 
     public StudyResult {
         preflight = List.copyOf(preflight);
+    }
+
+    /** A result whose answers are built from the rest. */
+    public StudyResult(Scenario scenario, ResolvedFlow flow, DiffusivityResult diffusivity, Forecast forecast,
+                       String toolVersion, Instant finished, List<String> preflight, TransportResult transport) {
+        this(scenario, flow, diffusivity, forecast, toolVersion, finished, preflight, transport,
+                AnswerBuilder.build(scenario, diffusivity, transport));
     }
 
     /** The turbulence statistics (null for a verification flow). */

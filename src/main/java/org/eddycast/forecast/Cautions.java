@@ -15,7 +15,8 @@ public final class Cautions {
             "Decisions that affect people or the environment belong with licensed professionals, following local"
                     + " codes and the conditions of any permit.",
             "Before releasing dye or any other tracer, tell the authority responsible for the water and obtain"
-                    + " the permits it requires.",
+                    + " the permits it requires. Limits on concentrations (a detection limit, a cap at an intake)"
+                    + " come from the local authority: the tool carries none of its own.",
             "Whether a tracer is harmful at the planned dose, and the protection of drinking-water intakes and"
                     + " other users downstream, are outside this tool: check them separately.");
 

@@ -31,6 +31,9 @@ public final class ResultJson {
         root.put("scenario", study.scenario().name());
         root.put("finished", study.finished().toString());
         root.put("seed", study.scenario().simulation().seed());
+        if (study.answers() != null) {
+            AnswersJson.write(root, study.answers());
+        }
         ObjectNode eddy = root.putObject("eddyDiffusivity");
         eddy.put("unit", "m^2/s");
         eddy.put("interval", "95% Student-t over independent blocks");

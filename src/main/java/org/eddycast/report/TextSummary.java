@@ -19,8 +19,14 @@ public final class TextSummary {
     public static String of(StudyResult s) {
         DiffusivityResult r = s.diffusivity();
         StringBuilder sb = new StringBuilder();
+        if (s.answers() != null) {
+            sb.append(s.answers().headline()).append('\n');
+        }
         sb.append(String.format(Locale.ROOT, "eddycast %s, seed %d: %s%n", s.toolVersion(),
                 s.scenario().simulation().seed(), Printable.escape(s.scenario().name())));
+        if (s.answers() != null) {
+            AnswersText.append(sb, s.answers());
+        }
         for (String w : s.preflight()) {
             sb.append("  WARNING (before the run): ").append(w).append('\n');
         }

@@ -13,6 +13,8 @@ import java.util.List;
  *       {@code wavenumberRatio} to the power-law band.</li>
  *   <li>{@code release.position} places the dose in a tank; a channel's release is placed by
  *       {@code release.location} (centre-line or bank); other flows are unbounded and use neither.</li>
+ *   <li>{@code forecast.stations}, {@code forecast.targetPeak} and {@code forecast.cap} are distances
+ *       downstream: a channel only.</li>
  *   <li>{@code release.rate} is a continuous source in a channel (the steady plume); a tank forecast has no
  *       continuous source. Given alone it would leave the instantaneous-release peaks for a mass nobody gave,
  *       so {@code release.mass} must be given beside it.</li>
@@ -41,6 +43,15 @@ final class Applicability {
                 problems.add("flow.spectrum.kolmogorovLength applies to the model spectrum only; remove it, or set "
                         + "flow.spectrum.model to \"model\" (the power-law band is shaped by slope and "
                         + "wavenumberRatio)");
+            }
+        }
+        JsonNode forecast = root.path("forecast");
+        if (forecast.isObject() && !kind.isEmpty() && !kind.equals("channel")) {
+            for (String f : List.of("stations", "targetPeak", "cap")) {
+                if (forecast.has(f)) {
+                    problems.add("forecast." + f + " applies to a channel only (stations are distances downstream);"
+                            + " remove it");
+                }
             }
         }
         JsonNode release = root.path("release");

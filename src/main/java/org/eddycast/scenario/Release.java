@@ -8,11 +8,29 @@ package org.eddycast.scenario;
  * @param position   where in a tank (x, y, z from a corner of the equivalent box, m), or null for the centre;
  *                   unused in open water
  * @param atBank     in a channel: true for a release at the bank, false for the centre-line
+ * @param volume     volume of the injected solution (m^3), NaN when not given; its concentration M / V caps every
+ *                   reported concentration
+ * @param given      false when the scenario had no release block and the mass is the assumed 1 kg
  */
-public record Release(double mass, double rate, double[] position, boolean atBank) {
+public record Release(double mass, double rate, double[] position, boolean atBank, double volume, boolean given) {
 
     public Release {
         position = position == null ? null : position.clone();
+    }
+
+    /** A release the scenario gave, with no volume. */
+    public Release(double mass, double rate, double[] position, boolean atBank) {
+        this(mass, rate, position, atBank, Double.NaN, true);
+    }
+
+    /** The injected solution's concentration M / V (kg/m^3), infinite when no volume was given. */
+    public double stockConcentration() {
+        return Double.isNaN(volume) ? Double.POSITIVE_INFINITY : mass / volume;
+    }
+
+    /** "continuous" with a rate, otherwise "slug" (an instantaneous release). */
+    public String mode() {
+        return Double.isNaN(rate) ? "slug" : "continuous";
     }
 
     @Override
@@ -20,8 +38,8 @@ public record Release(double mass, double rate, double[] position, boolean atBan
         return position == null ? null : position.clone();
     }
 
-    /** One kilogram at once, centre-line, no continuous release. */
+    /** One kilogram at once (assumed: the scenario gave no release), centre-line, no continuous release. */
     public static Release defaults() {
-        return new Release(1.0, Double.NaN, null, false);
+        return new Release(1.0, Double.NaN, null, false, Double.NaN, false);
     }
 }

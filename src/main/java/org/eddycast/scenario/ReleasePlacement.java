@@ -22,6 +22,18 @@ public final class ReleasePlacement {
     /** One problem per coordinate of the release that lies outside the water; empty when all is well. */
     public static List<String> problems(Scenario s) {
         List<String> problems = new ArrayList<>();
+        if (s.flow() instanceof ChannelFlow c && s.forecast() != null) {
+            double w = c.design().width();
+            List<Station> stations = s.forecast().stations();
+            for (int i = 0; i < stations.size(); i++) {
+                double across = stations.get(i).across();
+                if (!Double.isNaN(across) && across > w) {
+                    problems.add("forecast.stations[" + i + "].across must be between 0 and the surface width "
+                            + FieldReader.format(w) + " m (measured from the left water's edge); got "
+                            + FieldReader.format(across));
+                }
+            }
+        }
         double[] at = s.release() == null ? null : s.release().position();
         if (at == null || !(s.flow() instanceof TankFlow t)) {
             return problems;

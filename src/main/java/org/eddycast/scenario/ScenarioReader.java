@@ -362,7 +362,8 @@ public final class ScenarioReader {
                     true), p.number("z", "m", 0, 1e5, false, 0, true)};
             p.rejectUnknown();
         }
-        return new Release(mass, rate, position, where.equals("bank"));
+        double volume = r.number("volume", "m^3", 0, 1e6, true, Double.NaN, false);
+        return new Release(mass, rate, position, where.equals("bank"), volume, true);
     }
 
     private static ForecastSettings readForecast(FieldReader r) {
@@ -372,8 +373,45 @@ public final class ScenarioReader {
         if (edge >= 1) {
             r.problem(r.name("edgeFraction") + " must be below 1; got " + FieldReader.format(edge));
         }
-        return new ForecastSettings(horizon, measure, edge);
+        List<Station> stations = new java.util.ArrayList<>();
+        if (r.has("stations")) {
+            List<FieldReader> items = r.objects("stations");
+            if (items.size() > MAX_STATIONS) {
+                r.problem(r.name("stations") + " may hold at most " + MAX_STATIONS + " stations; got " + items.size());
+            }
+            for (FieldReader item : items) {
+                double distance = item.number("distance", "m", 0, 1e6, true, 1, true);
+                double across = item.number("across", "m", 0, 1e5, false, Double.NaN, false);
+                item.rejectUnknown();
+                stations.add(new Station(distance, across));
+            }
+        }
+        double detection = r.number("detectionLimit", "kg/m^3", 0, 1e3, true, Double.NaN, false);
+        double target = r.number("targetPeak", "kg/m^3", 0, 1e3, true, Double.NaN, false);
+        if (!Double.isNaN(target) && stations.isEmpty()) {
+            r.problem(r.name("targetPeak") + " plans the dose for a peak at the first station: give "
+                    + r.name("stations") + " [{\"distance\": m}] too, or remove it");
+        }
+        ConcentrationCap cap = null;
+        FieldReader c = r.object("cap", false);
+        if (c != null) {
+            cap = new ConcentrationCap(c.number("distance", "m", 0, 1e6, true, 1, true),
+                    c.number("concentration", "kg/m^3", 0, 1e3, true, 1, true));
+            c.rejectUnknown();
+        }
+        DisplayUnits units = DisplayUnits.si();
+        FieldReader u = r.object("units", false);
+        if (u != null) {
+            units = new DisplayUnits(u.choice("concentration", DisplayUnits.CONCENTRATIONS, "kg/m3", false),
+                    u.choice("time", DisplayUnits.TIMES, "s", false),
+                    u.choice("distance", DisplayUnits.DISTANCES, "m", false));
+            u.rejectUnknown();
+        }
+        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units);
     }
+
+    /** The most stations one forecast reads (each keeps its own counts per block and record). */
+    static final int MAX_STATIONS = 10;
 
     private static Substance readSubstance(FieldReader s) {
         String name = s.text("name", "", false);

@@ -46,11 +46,14 @@ public final class ScenarioWriter {
             substance.put("name", s.substance().name());
         }
         substance.put("molecularDiffusivity", s.substance().molecularDiffusivity());
-        release(root.putObject("release"), s.release(), s.flow());
+        if (s.release().given()) {
+            release(root.putObject("release"), s.release(), s.flow());
+        }
         ObjectNode forecast = root.putObject("forecast");
         optional(forecast, "horizon", s.forecast().horizon());
         forecast.put("widthMeasure", s.forecast().widthMeasure());
         forecast.put("edgeFraction", s.forecast().edgeFraction());
+        stations(forecast, s.forecast());
         simulation(root.putObject("simulation"), s.simulation());
         return root;
     }
@@ -147,9 +150,35 @@ public final class ScenarioWriter {
         }
     }
 
+    /** Stations, limits, the dose plan's target and the display units, each only when given. */
+    private static void stations(ObjectNode n, ForecastSettings f) {
+        if (!f.stations().isEmpty()) {
+            com.fasterxml.jackson.databind.node.ArrayNode list = n.putArray("stations");
+            for (Station st : f.stations()) {
+                ObjectNode o = list.addObject();
+                o.put("distance", st.distance());
+                optional(o, "across", st.across());
+            }
+        }
+        optional(n, "detectionLimit", f.detectionLimit());
+        optional(n, "targetPeak", f.targetPeak());
+        if (f.cap() != null) {
+            ObjectNode c = n.putObject("cap");
+            c.put("distance", f.cap().distance());
+            c.put("concentration", f.cap().concentration());
+        }
+        if (!f.units().equals(DisplayUnits.si())) {
+            ObjectNode u = n.putObject("units");
+            u.put("concentration", f.units().concentration());
+            u.put("time", f.units().time());
+            u.put("distance", f.units().distance());
+        }
+    }
+
     /** The release's fields that apply to the flow (see {@link Applicability}): the reader refuses the others. */
     private static void release(ObjectNode n, Release r, FlowSpec flow) {
         n.put("mass", r.mass());
+        optional(n, "volume", r.volume());
         if (flow instanceof ChannelFlow) {
             optional(n, "rate", r.rate());
             n.put("location", r.atBank() ? "bank" : "centre-line");

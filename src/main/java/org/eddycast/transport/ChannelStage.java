@@ -46,11 +46,44 @@ public final class ChannelStage {
      * @param minDuration   simulate at least this long (s), for example to reach the stations asked about
      * @param particles     particles to follow (rounded up to 32 blocks of a multiple of 16)
      * @param seed          the seed
+     * @param stations      distances downstream (m) where the concentration against time is read; may be empty
+     * @param across        each station's position across (m), NaN for the cross-section mean
      */
     public record Request(ChannelSection section, double meanVelocity, double shearVelocity,
                           ChannelProfiles profiles, double fieldFactorRelativeHalfWidth, double molecular,
-                          boolean atBank, double minDuration, int particles, long seed) {
+                          boolean atBank, double minDuration, int particles, long seed, double[] stations,
+                          double[] across) {
+
+        public Request {
+            stations = stations.clone();
+            across = across.clone();
+            if (stations.length != across.length) {
+                throw new IllegalArgumentException("one position across per station; got " + stations.length
+                        + " stations and " + across.length + " positions");
+            }
+        }
+
+        /** A request with no stations. */
+        public Request(ChannelSection section, double meanVelocity, double shearVelocity, ChannelProfiles profiles,
+                       double fieldFactorRelativeHalfWidth, double molecular, boolean atBank, double minDuration,
+                       int particles, long seed) {
+            this(section, meanVelocity, shearVelocity, profiles, fieldFactorRelativeHalfWidth, molecular, atBank,
+                    minDuration, particles, seed, new double[0], new double[0]);
+        }
+
+        @Override
+        public double[] stations() {
+            return stations.clone();
+        }
+
+        @Override
+        public double[] across() {
+            return across.clone();
+        }
     }
+
+    /** Fine bins kept each side of a station (see {@link StationCounts}). */
+    static final int STATION_HALF_BINS = 40;
 
     /** The stage's model for a request. */
     public static ChannelTransport model(Request q) {
@@ -92,6 +125,18 @@ public final class ChannelStage {
         CloudMoments moments = new CloudMoments(q.meanVelocity(), times, blocks);
         SectionCells cells = new SectionCells(model, STRIPS, LAYERS);
         CellCounts counts = new CellCounts(cells, blocks, settings.records());
+        double[] stations = q.stations();
+        double[] stationAcross = q.across();
+        int[] strip = new int[stations.length];
+        double[] stripShare = new double[stations.length];
+        CellMap strips = cells.acrossWidth();
+        for (int k = 0; k < strip.length; k++) {
+            strip[k] = Double.isNaN(stationAcross[k]) ? -1 : strips.cellOf(0, Math.min(stationAcross[k], w), 0);
+            stripShare[k] = strip[k] < 0 ? 1 : strips.share(strip[k]);
+        }
+        double fineBin = q.meanVelocity() * dt * recordEvery;
+        StationCounts atStations = new StationCounts(stations, strip, w, STRIPS, fineBin, STATION_HALF_BINS, blocks,
+                settings.records());
         double y0 = q.atBank() ? 0 : 0.5 * w;
         ReleaseSampler release = (rng, x, y, z, n) -> {
             for (int i = 0; i < n; i++) {
@@ -100,7 +145,7 @@ public final class ChannelStage {
                 z[i] = 0;
             }
         };
-        TransportRunner.run(model, release, settings, List.of(moments, counts), threads, progress, cancel);
+        TransportRunner.run(model, release, settings, List.of(moments, counts, atStations), threads, progress, cancel);
 
         int records = times.length;
         double[][] variance = new double[3][records];
@@ -137,9 +182,18 @@ public final class ChannelStage {
                 settings.particles(), blocks, steps, dt, duration, depthTime, widthTime));
         notes.add("release: an instantaneous slug at the surface " + (q.atBank() ? "at the left water's edge"
                 : "on the centre-line"));
+        List<StationCurve> curves = List.of(StationCurves.of(atStations, moments, 1.0, q.section().area(),
+                stripShare, stationAcross));
+        if (stations.length > 0) {
+            notes.add(String.format(Locale.ROOT, "stations: particles counted within half a bin of each station,"
+                    + " the bin a fifth of the cloud's along-flow standard deviation and at least %.3g m (the"
+                    + " distance the mean flow covers between records), at most %.3g m; a position across reads"
+                    + " the strip of %d across the width that holds it", fineBin,
+                    (2 * STATION_HALF_BINS + 1) * fineBin, STRIPS));
+        }
         double elapsed = (System.nanoTime() - start) / 1e9;
         return new ChannelStageResult(times, variance, skewness, peak, longitudinal, transverse, vertical,
                 mixedWidth, mixedDepth, q.meanVelocity(), q.section().area(), windowStart, settings.particles(),
-                blocks, steps, dt, elapsed, warnings, notes);
+                blocks, steps, dt, elapsed, warnings, notes, curves);
     }
 }

@@ -25,13 +25,16 @@ import java.util.List;
  * @param elapsedSeconds         wall time of the stage
  * @param warnings               what the user must know
  * @param notes                  how the stage was set up
+ * @param stations               the concentration against time at each station asked about, for a release of
+ *                               1 kg (concentrations scale with the mass)
  */
 public record ChannelStageResult(double[] times, double[][] variance, double[] skewness, double[] sectionPeakFactor,
                                  Estimate longitudinalDispersion, Estimate transverseDiffusivity,
                                  Estimate verticalDiffusivity, Estimate timeToMixedWidth,
                                  Estimate timeToMixedDepth, double meanVelocity, double area, double windowStart,
                                  long particles, int blocks, long steps, double timeStep, double elapsedSeconds,
-                                 List<String> warnings, List<String> notes) implements TransportResult {
+                                 List<String> warnings, List<String> notes, List<StationCurve> stations)
+        implements TransportResult {
 
     public ChannelStageResult {
         times = times.clone();
@@ -40,6 +43,7 @@ public record ChannelStageResult(double[] times, double[][] variance, double[] s
         sectionPeakFactor = sectionPeakFactor.clone();
         warnings = List.copyOf(warnings);
         notes = List.copyOf(notes);
+        stations = stations == null ? List.of() : List.copyOf(stations);
     }
 
     @Override

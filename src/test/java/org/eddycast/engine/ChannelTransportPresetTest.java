@@ -1,5 +1,6 @@
 package org.eddycast.engine;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -14,6 +15,7 @@ import org.eddycast.scenario.ChannelFlow;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.transport.ChannelStageResult;
+import org.eddycast.transport.Passage;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -35,9 +37,52 @@ class ChannelTransportPresetTest {
                 new Cancellation());
     }
 
+    private static StudyResult centreRun;
+
+    private static synchronized StudyResult centre() throws Exception {
+        if (centreRun == null) {
+            centreRun = run(false);
+        }
+        return centreRun;
+    }
+
+    /**
+     * The preset's question at 200 m: the headline answers it first, the dose plan follows by linearity (a slug's
+     * concentrations are proportional to its mass: the advection-diffusion equation is linear, Crank 1975, The
+     * Mathematics of Diffusion), and no concentration reported anywhere exceeds the injected solution's.
+     */
+    @Test
+    void lowlandPresetAnswersAtItsStation() throws Exception {
+        StudyResult r = centre();
+        Answers a = r.answers();
+        assertTrue(a.headline().startsWith("200 m downstream: peak "), a.headline());
+        assertTrue(a.headline().contains(" ug/L at ") && a.headline().contains(" min"), a.headline());
+        assertTrue(org.eddycast.report.TextSummary.of(r).startsWith(a.headline() + "\n"), "text opens with it");
+        Answers.StationAnswer station = a.stations().get(0);
+        double mass = r.scenario().release().mass();
+        double perKg = station.passage().peak() / mass;
+        Answers.DosePlan plan = a.dosePlan();
+        assertEquals(plan.targetPeak(), plan.mass() * perKg, 1e-12 * plan.targetPeak(), "dose by linearity");
+        double stock = r.scenario().release().stockConcentration();
+        for (double c : station.curve().concentration()) {
+            assertTrue(c <= stock, "station value " + c + " above the stock " + stock);
+        }
+        for (double c : r.forecast().peakConcentration()) {
+            assertTrue(c <= stock, "forecast peak " + c + " above the stock " + stock);
+        }
+        double x = 200;
+        double u = ((ChannelFlow) r.scenario().flow()).design().meanVelocity();
+        Passage p = station.passage();
+        assertTrue(p.arrival() < p.peakTime() && p.peakTime() < p.fallsBack(), "arrival, peak, fall back in order");
+        // the cloud's centre passes at x / U; a shear-dispersed cloud's peak comes slightly earlier (its tail
+        // trails), so the peak lies within the passage's own spread of x / U
+        double spread = p.fallsBack() - p.arrival();
+        assertTrue(Math.abs(p.peakTime() - x / u) < spread, "peak at " + p.peakTime() + " s against x/U " + x / u);
+    }
+
     @Test
     void lowlandChannelAgreesWithTheHandbookWhereItShould() throws Exception {
-        StudyResult centre = run(false);
+        StudyResult centre = centre();
         StudyResult bank = run(true);
         Scenario s = centre.scenario();
         var ch = ((ChannelFlow) s.flow()).design();
