@@ -45,8 +45,19 @@ public record Headline(String text, List<Figure> figures) {
         figures = List.copyOf(figures);
     }
 
-    /** The headline of one study. */
+    /**
+     * The headline of one study: the answer sentence of its question (the stations, the blend time, in the
+     * scenario's display units) when the result has one, with the figures below.
+     */
     public static Headline of(StudyResult s) {
+        Headline built = built(s);
+        if (s.answers() != null && s.answers().headline() != null && !s.answers().headline().isBlank()) {
+            return new Headline(s.answers().headline(), built.figures());
+        }
+        return built;
+    }
+
+    private static Headline built(StudyResult s) {
         Forecast f = s.forecast();
         if (f != null && !f.mixing().isEmpty()) {
             Forecast.MixingFigure m = f.mixing().get(0);

@@ -158,7 +158,7 @@ class PanelRunTest {
         assertTrue(callEdt(() -> panel.results().bannerText()).contains("reused an identical earlier simulation"));
         String headline = callEdt(() -> panel.results().headlineText());
         assertEquals(org.eddycast.report.Headline.of(panel.lastResult()).text(), headline);
-        assertTrue(headline.startsWith("Distance to mixed"), headline);
+        assertTrue(headline.startsWith("Mixed across the width after "), headline);
         onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.CURVES_TAB));
         shot(panel, "channel-width", theme);
         onEdt(() -> panel.results().tabs().setSelectedIndex(ResultsView.HANDBOOK_TAB));
