@@ -24,6 +24,9 @@ import org.eddycast.transport.TankStageResult;
  */
 final class TankForecast {
 
+    /** Residence time over blend time above which a continuous tank mixes near-ideally (Roussinova & Kresta 2008). */
+    static final double RESIDENCE_OVER_BLEND = 10;
+
     private TankForecast() {
     }
 
@@ -74,6 +77,19 @@ final class TankForecast {
                         String.format(Locale.ROOT, "reading of a sphere of radius %.2g m", probe.radius()) + note(e)));
             }
         }
+        List<String> residence = new ArrayList<>();
+        if (tank.throughflow() != null) {
+            double tau = tank.volume() / tank.throughflow();
+            mixing.add(new Forecast.MixingFigure("mean residence time V / Q_in", tau, tau, tau, "s",
+                    "liquid volume over the throughflow"));
+            if (p95.determined()) {
+                double ratio = tau / p95.value();
+                residence.add(String.format(Locale.ROOT, "flow-through tank: the mean residence time %.4g s is %.3g"
+                        + " times the 95%% blend time; near-ideal mixing wants at least %.0f (Roussinova & Kresta"
+                        + " 2008, Ind. Eng. Chem. Res. 47:3532)%s", tau, ratio, RESIDENCE_OVER_BLEND,
+                        ratio < RESIDENCE_OVER_BLEND ? ": WARNING, below it, part of the feed leaves unmixed" : ""));
+            }
+        }
         List<Comparison> handbook = new ArrayList<>();
         HandbookEstimate grenville = TankBlendCorrelation.blendTime(tank);
         if (p95.determined()) {
@@ -94,6 +110,11 @@ final class TankForecast {
                 + " resolved");
         assumptions.add("blend: every one of the tank's equal-volume cells within the stated fraction of the final"
                 + " value; counting noise removed");
+        assumptions.addAll(residence);
+        if (tank.throughflow() != null) {
+            assumptions.add("the blend time is that of a batch: the throughflow's own inlet and outlet jets are not"
+                    + " in the circulation");
+        }
         return new Forecast(false, times, times, measure, s.forecast().edgeFraction(), width, low, high, end, peak,
                 mixing, handbook, assumptions, Cautions.ALL, new double[0]);
     }

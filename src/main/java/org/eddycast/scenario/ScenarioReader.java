@@ -216,6 +216,7 @@ public final class ScenarioReader {
         boolean baffled = f.bool("baffled", true);
         Double pumping = f.has("pumpingNumber") ? f.number("pumpingNumber", "", 0, 10, true, 0.7, true) : null;
         Double clearance = f.has("clearance") ? f.number("clearance", "m", 0, h, true, h / 3, true) : null;
+        Double throughflow = f.has("throughflow") ? f.number("throughflow", "m^3/s", 0, 1e6, true, 1, true) : null;
         boolean ok = true;
         if (d >= t) {
             f.problem(f.name("impellerDiameter") + " must be smaller than tankDiameter (" + FieldReader.format(t)
@@ -239,7 +240,7 @@ public final class ScenarioReader {
             return null;
         }
         try {
-            return new TankFlow(new TankDesign(t, h, d, n, po, type, nu, baffled, pumping, clearance));
+            return new TankFlow(new TankDesign(t, h, d, n, po, type, nu, baffled, pumping, clearance, throughflow));
         } catch (IllegalArgumentException e) {
             f.problem(e.getMessage());
             return null;

@@ -96,6 +96,9 @@ public final class ScenarioWriter {
             if (d.clearance() != null) {
                 n.put("clearance", d.clearance());
             }
+            if (d.throughflow() != null) {
+                n.put("throughflow", d.throughflow());
+            }
         } else if (flow instanceof ChannelFlow c) {
             ChannelDesign d = c.design();
             n.put("depth", d.depth());

@@ -18,10 +18,19 @@ package org.eddycast.scenario;
  * @param baffled            true when the tank has wall baffles
  * @param pumpingNumber      N_Q (-), greater than 0, or null to use the impeller type's typical value
  * @param clearance          height of the impeller above the bottom (m), between 0 and H, or null for T/3
+ * @param throughflow        the flow through a continuously fed tank (m^3/s), greater than 0, or null for a batch
  */
 public record TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
                          Double powerNumber, ImpellerType impellerType, Double kinematicViscosity,
-                         boolean baffled, Double pumpingNumber, Double clearance) {
+                         boolean baffled, Double pumpingNumber, Double clearance, Double throughflow) {
+
+    /** A batch tank (no throughflow). */
+    public TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
+                      Double powerNumber, ImpellerType impellerType, Double kinematicViscosity, boolean baffled,
+                      Double pumpingNumber, Double clearance) {
+        this(tankDiameter, liquidHeight, impellerDiameter, impellerSpeed, powerNumber, impellerType,
+                kinematicViscosity, baffled, pumpingNumber, clearance, null);
+    }
 
     /** A tank with the impeller type's typical pumping number and the impeller at a third of T. */
     public TankDesign(double tankDiameter, double liquidHeight, double impellerDiameter, double impellerSpeed,
@@ -52,6 +61,9 @@ public record TankDesign(double tankDiameter, double liquidHeight, double impell
         }
         if (clearance != null) {
             DesignChecks.openRange("flow.clearance", clearance, 0, liquidHeight, "m");
+        }
+        if (throughflow != null) {
+            DesignChecks.positive("flow.throughflow", throughflow, "m^3/s");
         }
     }
 

@@ -35,6 +35,9 @@ public final class FormLayout {
                     FieldSpec.number("flow.impellerSpeed", "rev/s", "tank", false),
                     FieldSpec.choice("flow.impellerType", "tank", IMPELLERS),
                     FieldSpec.flag("flow.baffled", "tank"),
+                    FieldSpec.number("flow.pumpingNumber", "", "tank", true),
+                    FieldSpec.number("flow.clearance", "m", "tank", true),
+                    FieldSpec.number("flow.throughflow", "m\u00b3/s", "tank", true),
                     FieldSpec.number("flow.depth", "m", "channel", false),
                     FieldSpec.number("flow.width", "m", "channel", false),
                     new FieldSpec("flow.meanVelocity", FieldSpec.Kind.NUMBER, "m/s", "channel", false, List.of()),
@@ -51,7 +54,10 @@ public final class FormLayout {
                     FieldSpec.number("substance.molecularDiffusivity", "m\u00b2/s", null, false),
                     FieldSpec.number("release.mass", "kg", null, true),
                     FieldSpec.number("release.rate", "kg/s", "channel", true),
-                    FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")))),
+                    FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")),
+                    FieldSpec.number("release.position.x", "m", "tank", true),
+                    FieldSpec.number("release.position.y", "m", "tank", true),
+                    FieldSpec.number("release.position.z", "m", "tank", true))),
             new Section("section.forecast", List.of(
                     FieldSpec.number("forecast.horizon", "s", null, true),
                     // the scenario file's default (full width at half maximum) first, so an empty form shows it
