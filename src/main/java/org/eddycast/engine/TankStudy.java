@@ -60,24 +60,53 @@ final class TankStudy {
         return new double[] {x, y, Math.max(0, Math.min(tank.liquidHeight(), at[2]))};
     }
 
-    static TankStageResult run(Scenario s, TankDesign tank, double[] fieldFactor, int threads,
-                               DoubleConsumer progress, Cancellation cancel) {
-        TankTransport model = model(tank, fieldFactor[0], s.substance().molecularDiffusivity());
+    /**
+     * The probes in the tank's own units (diameters, from the axis): the scenario's, placed as the feed point is
+     * and moved inside the liquid by a probe's radius where they stand nearer a wall, or the usual three: near
+     * the surface across the axis from the feed, at mid-depth by the wall, near the bottom half-way out.
+     */
+    static void probes(Scenario s, TankDesign tank, double[] feed, List<String> names, List<double[]> probes) {
         double length = tank.tankDiameter();
         double r = 0.5;
         double h = tank.liquidHeight() / length;
-        List<String> names = List.of("near the surface, across the axis from the feed", "mid-depth by the wall",
-                "near the bottom, half-way out");
-        double[] feed = feed(s, tank);
-        for (int i = 0; i < 3; i++) {
-            feed[i] /= length;
+        if (!s.forecast().probes().isEmpty()) {
+            double side = Math.sqrt(Math.PI) / 2;
+            for (org.eddycast.scenario.ProbePoint p : s.forecast().probes()) {
+                double x = p.x() / length - side / 2;
+                double y = p.y() / length - side / 2;
+                double reach = r - PROBE_RADIUS;
+                double radial = Math.hypot(x, y);
+                if (radial > reach) {
+                    x *= reach / radial;
+                    y *= reach / radial;
+                }
+                double z = Math.max(PROBE_RADIUS, Math.min(h - PROBE_RADIUS, p.z() / length));
+                names.add(String.format(java.util.Locale.ROOT, "at (%.3g, %.3g, %.3g) m", p.x(), p.y(), p.z()));
+                probes.add(new double[] {x, y, z});
+            }
+            return;
         }
         double angle = Math.atan2(feed[1], feed[0]) + Math.PI;
         double c = Math.cos(angle);
         double sn = Math.sin(angle);
-        List<double[]> probes = List.of(new double[] {0.5 * r * c, 0.5 * r * sn, 0.85 * h},
-                new double[] {-0.75 * r * sn, 0.75 * r * c, 0.5 * h},
-                new double[] {-0.5 * r * c, -0.5 * r * sn, 0.12 * h});
+        names.addAll(List.of("near the surface, across the axis from the feed", "mid-depth by the wall",
+                "near the bottom, half-way out"));
+        probes.add(new double[] {0.5 * r * c, 0.5 * r * sn, 0.85 * h});
+        probes.add(new double[] {-0.75 * r * sn, 0.75 * r * c, 0.5 * h});
+        probes.add(new double[] {-0.5 * r * c, -0.5 * r * sn, 0.12 * h});
+    }
+
+    static TankStageResult run(Scenario s, TankDesign tank, double[] fieldFactor, int threads,
+                               DoubleConsumer progress, Cancellation cancel) {
+        TankTransport model = model(tank, fieldFactor[0], s.substance().molecularDiffusivity());
+        double length = tank.tankDiameter();
+        double[] feed = feed(s, tank);
+        for (int i = 0; i < 3; i++) {
+            feed[i] /= length;
+        }
+        List<String> names = new java.util.ArrayList<>();
+        List<double[]> probes = new java.util.ArrayList<>();
+        probes(s, tank, feed, names, probes);
         double po = TankRules.powerNumber(tank).value();
         double nq = TankFlowRules.pumpingNumber(tank).value();
         double n = tank.impellerSpeed();

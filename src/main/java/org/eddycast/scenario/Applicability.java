@@ -54,6 +54,9 @@ final class Applicability {
                 }
             }
         }
+        if (forecast.isObject() && forecast.has("probes") && !kind.isEmpty() && !kind.equals("tank")) {
+            problems.add("forecast.probes applies to a tank only (probes stand at points in the tank); remove it");
+        }
         JsonNode release = root.path("release");
         if (!release.isObject() || kind.isEmpty()) {
             return;

@@ -13,13 +13,22 @@ import java.util.List;
  * @param targetPeak     the peak wanted at the first station (kg/m^3), for the dose plan; NaN for none
  * @param cap            a concentration not to exceed at a named distance, or null
  * @param units          the units of the text outputs
+ * @param probes         where a tank's virtual probes stand (a tank only); empty for the usual three
  */
 public record ForecastSettings(double horizon, String widthMeasure, double edgeFraction, List<Station> stations,
-                               double detectionLimit, double targetPeak, ConcentrationCap cap, DisplayUnits units) {
+                               double detectionLimit, double targetPeak, ConcentrationCap cap, DisplayUnits units,
+                               List<ProbePoint> probes) {
 
     public ForecastSettings {
         stations = stations == null ? List.of() : List.copyOf(stations);
         units = units == null ? DisplayUnits.si() : units;
+        probes = probes == null ? List.of() : List.copyOf(probes);
+    }
+
+    /** Settings with the usual probes. */
+    public ForecastSettings(double horizon, String widthMeasure, double edgeFraction, List<Station> stations,
+                            double detectionLimit, double targetPeak, ConcentrationCap cap, DisplayUnits units) {
+        this(horizon, widthMeasure, edgeFraction, stations, detectionLimit, targetPeak, cap, units, List.of());
     }
 
     /** The settings of the width forecast alone: no stations, limits or dose plan, SI units. */

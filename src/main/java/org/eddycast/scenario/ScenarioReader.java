@@ -408,7 +408,19 @@ public final class ScenarioReader {
                     u.choice("distance", DisplayUnits.DISTANCES, "m", false));
             u.rejectUnknown();
         }
-        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units);
+        List<ProbePoint> probes = new java.util.ArrayList<>();
+        if (r.has("probes")) {
+            List<FieldReader> items = r.objects("probes");
+            if (items.size() > MAX_STATIONS) {
+                r.problem(r.name("probes") + " may hold at most " + MAX_STATIONS + " probes; got " + items.size());
+            }
+            for (FieldReader item : items) {
+                probes.add(new ProbePoint(item.number("x", "m", 0, 1e3, false, 0, true),
+                        item.number("y", "m", 0, 1e3, false, 0, true), item.number("z", "m", 0, 1e3, false, 0, true)));
+                item.rejectUnknown();
+            }
+        }
+        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units, probes);
     }
 
     /** The most stations one forecast reads (each keeps its own counts per block and record). */

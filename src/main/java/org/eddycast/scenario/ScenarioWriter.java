@@ -163,6 +163,15 @@ public final class ScenarioWriter {
                 optional(o, "across", st.across());
             }
         }
+        if (!f.probes().isEmpty()) {
+            com.fasterxml.jackson.databind.node.ArrayNode list = n.putArray("probes");
+            for (ProbePoint p : f.probes()) {
+                ObjectNode o = list.addObject();
+                o.put("x", p.x());
+                o.put("y", p.y());
+                o.put("z", p.z());
+            }
+        }
         optional(n, "detectionLimit", f.detectionLimit());
         optional(n, "targetPeak", f.targetPeak());
         if (f.cap() != null) {
