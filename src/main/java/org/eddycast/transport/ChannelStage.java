@@ -104,8 +104,7 @@ public final class ChannelStage {
         double duration = Math.max(Math.max(widthTime, 3 * depthTime), q.minDuration());
         double dt = depthTime / STEPS_PER_DEPTH_TIME;
         List<String> warnings = new ArrayList<>();
-        int particles = Math.max(16, (q.particles() + 32 * 16 - 1) / (32 * 16) * 16) * 32;
-        long maxSteps = (long) Math.min(MAX_STEPS, MAX_WORK / particles);
+        long maxSteps = TransportSettings.stageStepLimit(q.particles(), MAX_STEPS, MAX_WORK);
         if (duration / dt > maxSteps) {
             warnings.add(String.format(Locale.ROOT, "the section mixes slowly: mixing across the width takes about"
                     + " %.3g s (W^2/K_y), but the run stops at %.3g s (%d steps); the distance to mixed across the"
@@ -113,14 +112,11 @@ public final class ChannelStage {
                     + " cloud not yet mixed across", widthTime, maxSteps * dt, maxSteps));
             duration = maxSteps * dt;
         }
-        long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
-        int recordEvery = (int) Math.max(1, steps / RECORDS);
-        steps = (long) recordEvery * RECORDS;
-        dt = duration / steps;
-        int blocks = 32;
-        int blockSize = Math.max(16, (q.particles() + blocks * 16 - 1) / (blocks * 16) * 16);
-        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps,
-                TransportSettings.mixedRecords(steps, EARLY_RECORDS, RECORDS), q.seed());
+        TransportSettings settings = TransportSettings.stage(q.particles(), duration, dt, RECORDS, EARLY_RECORDS,
+                q.seed());
+        dt = settings.timeStep();
+        long steps = settings.steps();
+        int blocks = settings.blocks();
         double[] times = settings.recordTimes();
         CloudMoments moments = new CloudMoments(q.meanVelocity(), times, blocks);
         SectionCells cells = new SectionCells(model, STRIPS, LAYERS);
@@ -134,7 +130,7 @@ public final class ChannelStage {
             strip[k] = Double.isNaN(stationAcross[k]) ? -1 : strips.cellOf(0, Math.min(stationAcross[k], w), 0);
             stripShare[k] = strip[k] < 0 ? 1 : strips.share(strip[k]);
         }
-        double fineBin = q.meanVelocity() * dt * recordEvery;
+        double fineBin = q.meanVelocity() * duration / RECORDS;
         StationCounts atStations = new StationCounts(stations, strip, w, STRIPS, fineBin, STATION_HALF_BINS, blocks,
                 settings.records());
         double y0 = q.atBank() ? 0 : 0.5 * w;

@@ -54,16 +54,8 @@ public final class MixingTimeEstimator {
      */
     public static double[] peakFactor(CellCounts counts, double[] times) {
         int records = counts.records();
-        double[][] r = new double[records][];
-        for (int j = 0; j < records; j++) {
-            r[j] = record(counts, j, -1);
-        }
-        double ratio = Double.NaN;
-        for (int j = 0; j < records; j++) {
-            if (r[j][0] > 10 * RESOLVED * r[j][1] && Math.sqrt(r[j][0]) < LATE_COV) {
-                ratio = Math.sqrt(Math.max(r[j][2], 0) / r[j][0]);
-            }
-        }
+        double[][] r = records(counts, -1);
+        double ratio = lateRatio(r);
         double[] fit = lateDecay(r, times);
         double[] peak = new double[records];
         for (int j = 0; j < records; j++) {
@@ -72,6 +64,29 @@ public final class MixingTimeEstimator {
             peak[j] = 1 + (clear || !Double.isFinite(ratio) ? Math.sqrt(Math.max(r[j][2], 0)) : ratio * cov);
         }
         return peak;
+    }
+
+    /** The records of every block but {@code omit} (-1 for none). */
+    private static double[][] records(CellCounts counts, int omit) {
+        double[][] r = new double[counts.records()][];
+        for (int j = 0; j < r.length; j++) {
+            r[j] = record(counts, j, omit);
+        }
+        return r;
+    }
+
+    /**
+     * The ratio of largest to rms deviation at the last record that stands far above the noise late in mixing
+     * (CoV below {@value #LATE_COV}); NaN when there is none.
+     */
+    private static double lateRatio(double[][] r) {
+        double ratio = Double.NaN;
+        for (double[] rj : r) {
+            if (rj[0] > 10 * RESOLVED * rj[1] && Math.sqrt(rj[0]) < LATE_COV) {
+                ratio = Math.sqrt(Math.max(rj[2], 0) / rj[0]);
+            }
+        }
+        return ratio;
     }
 
     private record Crossing(double time, String note) {
@@ -113,28 +128,22 @@ public final class MixingTimeEstimator {
 
     private static Crossing crossing(CellCounts counts, double[] times, double p, int omit) {
         int records = counts.records();
-        double[][] r = new double[records][];
-        for (int j = 0; j < records; j++) {
-            r[j] = record(counts, j, omit);
-        }
+        double[][] r = records(counts, omit);
         // The pattern's ratio of largest to rms deviation, read at the last record still far above the noise;
         // for two cells (a probe and the rest) it is fixed by their shares.
-        double ratio = Double.NaN;
         CellMap map = counts.map();
+        double ratio;
         if (map.cells() == 2) {
             double small = Math.min(map.share(0), map.share(1));
             ratio = Math.sqrt((1 - small) / small);
-        }
-        boolean fixed = Double.isFinite(ratio);
-        for (int j = 0; j < records && !fixed; j++) {
-            if (r[j][0] > 10 * RESOLVED * r[j][1] && Math.sqrt(r[j][0]) < LATE_COV) {
-                ratio = Math.sqrt(Math.max(r[j][2], 0) / r[j][0]);
-            }
-        }
-        if (!Double.isFinite(ratio)) {
-            for (int j = 0; j < records; j++) {
-                if (r[j][0] > 10 * RESOLVED * r[j][1]) {
-                    ratio = Math.sqrt(Math.max(r[j][2], 0) / r[j][0]);
+        } else {
+            ratio = lateRatio(r);
+            if (Double.isNaN(ratio)) {
+                // no resolved record late in mixing: the last resolved one at all
+                for (double[] rk : r) {
+                    if (rk[0] > 10 * RESOLVED * rk[1]) {
+                        ratio = Math.sqrt(Math.max(rk[2], 0) / rk[0]);
+                    }
                 }
             }
         }

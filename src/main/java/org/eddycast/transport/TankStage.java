@@ -62,22 +62,17 @@ public final class TankStage {
         double kMax = model.maxDiffusivity();
         dt = Math.min(dt, Math.pow(0.05 * q.impellerDiameter(), 2) / (2 * kMax));
         List<String> warnings = new ArrayList<>();
-        int particles = Math.max(16, (q.particles() + 32 * 16 - 1) / (32 * 16) * 16) * 32;
-        long maxSteps = (long) Math.min(MAX_STEPS, MAX_WORK / particles);
+        long maxSteps = TransportSettings.stageStepLimit(q.particles(), MAX_STEPS, MAX_WORK);
         if (duration / dt > maxSteps) {
             warnings.add(String.format(Locale.ROOT, "the tank mixes slowly: the run stops at %d steps (%.3g"
                     + " revolutions); blend times beyond it are extrapolated or not determined", maxSteps,
                     maxSteps * dt));
             duration = maxSteps * dt;
         }
-        long steps = Math.max(RECORDS, (long) Math.ceil(duration / dt));
-        int recordEvery = (int) Math.max(1, steps / RECORDS);
-        steps = (long) recordEvery * RECORDS;
-        dt = duration / steps;
-        int blocks = 32;
-        int blockSize = Math.max(16, (q.particles() + blocks * 16 - 1) / (blocks * 16) * 16);
-        TransportSettings settings = new TransportSettings(blocks, blockSize, dt, steps,
-                TransportSettings.mixedRecords(steps, 30, RECORDS), q.seed());
+        TransportSettings settings = TransportSettings.stage(q.particles(), duration, dt, RECORDS, 30, q.seed());
+        dt = settings.timeStep();
+        long steps = settings.steps();
+        int blocks = settings.blocks();
         double[] times = settings.recordTimes();
         CellCounts cells = new CellCounts(new TankCells(model.radius(), model.height(), RINGS, SECTORS, LAYERS),
                 blocks, settings.records());

@@ -137,10 +137,10 @@ public final class TankTransport implements TransportModel {
 
     @Override
     public void evaluate(double x, double y, double z, double[] out) {
-        velocity(x, y, z, out);
         double r = Math.sqrt(x * x + y * y);
         double rz = radialZone(r);
         double vz = verticalZone(z);
+        velocity(x, y, z, rz * vz, out);
         double eps = bulkDissipation + zoneDissipation * rz * vz;
         double root = Math.cbrt(eps);
         double k = molecular + diffusivityScale * root;
@@ -164,6 +164,11 @@ public final class TankTransport implements TransportModel {
 
     @Override
     public void velocity(double x, double y, double z, double[] out) {
+        velocity(x, y, z, radialZone(Math.sqrt(x * x + y * y)) * verticalZone(z), out);
+    }
+
+    /** The mean velocity, with the impeller zone's indicator at the point already known. */
+    private void velocity(double x, double y, double z, double zone, double[] out) {
         double r2 = x * x + y * y;
         double inv = 1 / (radius * radius);
         double g;
@@ -183,7 +188,7 @@ public final class TankTransport implements TransportModel {
         }
         // u_r / r = -A (1 - r^2/R^2) g'(z); u_z = A f'(r) / r g(z) = 2 A (1 - 2 r^2 / R^2) g(z)
         double radialOverR = -amplitude * (1 - r2 * inv) * gPrime;
-        double omega = zoneAngularVelocity * radialZone(Math.sqrt(r2)) * verticalZone(z);
+        double omega = zoneAngularVelocity * zone;
         out[0] = radialOverR * x - omega * y;
         out[1] = radialOverR * y + omega * x;
         out[2] = 2 * amplitude * (1 - 2 * r2 * inv) * g;

@@ -31,6 +31,32 @@ public record TransportSettings(int blocks, int blockSize, double timeStep, long
         return r;
     }
 
+    /** Independent blocks of a stage's run. */
+    public static final int STAGE_BLOCKS = 32;
+
+    /** Particles per block for a requested count: whole multiples of 16 over {@value #STAGE_BLOCKS} blocks. */
+    public static int stageBlockSize(int particles) {
+        return Math.max(16, (particles + STAGE_BLOCKS * 16 - 1) / (STAGE_BLOCKS * 16) * 16);
+    }
+
+    /** The most steps a stage's run of the requested particles may take within both limits. */
+    public static long stageStepLimit(int particles, long maxSteps, double maxParticleSteps) {
+        return (long) Math.min(maxSteps, maxParticleSteps / ((double) STAGE_BLOCKS * stageBlockSize(particles)));
+    }
+
+    /**
+     * A stage's run over {@code duration} with a step of at most {@code maxStep}: the step count a whole number
+     * of the {@code records} uniform record intervals (the step shrunk to fit), with {@code early} geometric
+     * record times before the first of them.
+     */
+    public static TransportSettings stage(int particles, double duration, double maxStep, int records, int early,
+                                          long seed) {
+        long steps = Math.max(records, (long) Math.ceil(duration / maxStep));
+        steps = (steps + records - 1) / records * records;
+        return new TransportSettings(STAGE_BLOCKS, stageBlockSize(particles), duration / steps, steps,
+                mixedRecords(steps, early, records), seed);
+    }
+
     /**
      * Record times dense early (a geometric sequence from the first step, to follow a cloud still small beside
      * the section) and uniform late (for the late-window slope): about {@code early + late} records.
