@@ -11,6 +11,7 @@ import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.util.ArrayList;
 import java.util.List;
+import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
  * Lays the summary sheet out on A4 pages (points, 1/72 inch) and draws any page into a Graphics2D. The PDF
@@ -50,6 +51,8 @@ public final class SummarySheetLayout {
     private final List<String> pageOne = new ArrayList<>();
     private final String title;
     private final String toolVersion;
+    /** The inputs' ranking under uncertain inputs, or null; drawn on page 1 when it fits, else on page 2. */
+    private final Block ranking;
 
     /**
      * @param content the sheet's text
@@ -57,6 +60,21 @@ public final class SummarySheetLayout {
      * @param charts  the charts for the detail pages (at most {@link #MAX_CHARTS})
      */
     public SummarySheetLayout(SummaryContent content, SheetFront front, List<ChartSpec> charts) {
+        this(content, front, charts, null);
+    }
+
+    /**
+     * @param content     the sheet's text
+     * @param front       what page 1 says
+     * @param charts      the charts for the detail pages (at most {@link #MAX_CHARTS})
+     * @param uncertainty the study's uncertainty part, or null; its ranking of the inputs (a
+     *                    {@link SensitivityChart} with the advice) goes on page 1 when it fits, else at the top of
+     *                    page 2
+     */
+    public SummarySheetLayout(SummaryContent content, SheetFront front, List<ChartSpec> charts,
+                              UncertaintySummary uncertainty) {
+        ranking = uncertainty == null || uncertainty.sensitivity().isEmpty() ? null
+                : rankingChart(uncertainty, PAGE_WIDTH - 2 * MARGIN);
         String name = content.scenarioName().length() > 60 ? content.scenarioName().substring(0, 57) + "..."
                 : content.scenarioName();
         footer = "eddycast " + content.toolVersion() + " \u2014 " + name + " \u2014 "
@@ -68,8 +86,9 @@ public final class SummarySheetLayout {
         List<ChartSpec> detailCharts = charts.subList(0, Math.min(MAX_CHARTS, charts.size()));
         // charts shrink in steps until the last page is not nearly empty (or they reach their smallest)
         List<List<Block>> detail = List.of();
+        Block detailRanking = ranking != null && !pages.get(0).contains(ranking) ? ranking : null;
         for (double chartHeight = 300; chartHeight >= 180; chartHeight -= 20) {
-            detail = paginate(detailBlocks(content, detailCharts, width, chartHeight));
+            detail = paginate(detailBlocks(content, detailCharts, detailRanking, width, chartHeight));
             if (detail.isEmpty() || fill(detail.get(detail.size() - 1)) >= NEARLY_EMPTY || detail.size() == 1
                     && detailCharts.isEmpty()) {
                 break;
@@ -81,6 +100,16 @@ public final class SummarySheetLayout {
     /** How full a page (0-based) is: its content's height over the usable height. */
     public double pageFill(int page) {
         return fill(pages.get(page));
+    }
+
+    /** The page (0-based) that shows the inputs' ranking, or -1 when the sheet has none. */
+    public int rankingPage() {
+        for (int p = 0; p < pages.size(); p++) {
+            if (ranking != null && pages.get(p).contains(ranking)) {
+                return p;
+            }
+        }
+        return -1;
     }
 
     /** The document's title. */
@@ -144,6 +173,12 @@ public final class SummarySheetLayout {
                     + " page 2 on." : "How each value was obtained: page 2 on.", SMALL, width, 2));
         }
         double room = usable - sum(page) - sum(bottom);
+        double frontChartMin = front.chart() == null ? 0 : 130;
+        if (ranking != null && room - RANKING_HEADING.height() - ranking.height() >= frontChartMin) {
+            page.add(RANKING_HEADING);
+            page.add(ranking);
+            room -= RANKING_HEADING.height() + ranking.height();
+        }
         if (front.chart() != null && room >= 120) {
             page.add(chart(front.chart(), width, Math.min(260, room - 8)));
         }
@@ -203,9 +238,14 @@ public final class SummarySheetLayout {
         return new SummaryContent.Table(List.of("input", "value", "input", "value"), out);
     }
 
-    private static List<Block> detailBlocks(SummaryContent content, List<ChartSpec> charts, double width,
-                                            double chartHeight) {
+    private static List<Block> detailBlocks(SummaryContent content, List<ChartSpec> charts, Block ranking,
+                                            double width, double chartHeight) {
         List<Block> blocks = new ArrayList<>();
+        if (ranking != null) {
+            // what did not fit on page 1 opens page 2
+            blocks.add(RANKING_HEADING);
+            blocks.add(ranking);
+        }
         if (!content.sideBySide().isEmpty()) {
             blocks.add(heading("Verdict in full"));
             blocks.add(text(content.verdict(), BODY, width, 4));
@@ -536,7 +576,21 @@ public final class SummarySheetLayout {
         return lines;
     }
 
+    private static final Heading RANKING_HEADING = new Heading("Which input to measure better (uncertain inputs)");
+
+    /** The inputs' ranking with the advice under it, sized to the number of inputs. */
+    private static Block rankingChart(UncertaintySummary u, double width) {
+        return drawing(Math.min(320, 110 + 26 * u.sensitivity().size()),
+                (g, area) -> SensitivityChart.draw(u, ChartRendering.PAPER, BODY, g, area));
+    }
+
     private static Block chart(ChartSpec spec, double width, double height) {
+        return drawing(height, (g, area) -> ChartRendering.draw(spec, ChartRendering.PAPER, BODY, g, area));
+    }
+
+    /** A chart of a height, drawn across the text width on its own copy of the graphics. */
+    private static Block drawing(double height,
+                                 java.util.function.BiConsumer<Graphics2D, Rectangle2D> painter) {
         return new Block() {
             @Override
             public double height() {
@@ -547,8 +601,7 @@ public final class SummarySheetLayout {
             public void draw(Graphics2D g, double x, double y, double w) {
                 Graphics2D c = (Graphics2D) g.create();
                 try {
-                    ChartRendering.draw(spec, ChartRendering.PAPER, BODY, c,
-                            new Rectangle2D.Double(x, y, w, height));
+                    painter.accept(c, new Rectangle2D.Double(x, y, w, height));
                 } finally {
                     c.dispose();
                 }

@@ -17,6 +17,7 @@ import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.util.Matrix;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
  * Writes the summary sheet as PDF: the {@link SummarySheetLayout} drawn through a Graphics2D bridge, so charts
@@ -34,10 +35,15 @@ public final class SummarySheetPdf {
 
     /** The layout of one study's sheet (for the PDF and the printer). */
     public static SummarySheetLayout layout(StudyResult result) {
+        return layout(result, null);
+    }
+
+    /** The layout of one study's sheet with its uncertainty part (null: none). */
+    public static SummarySheetLayout layout(StudyResult result, UncertaintySummary uncertainty) {
         SummaryContent content = SummaryContent.of(result);
         List<ChartSpec> charts = defaultCharts(result);
         return new SummarySheetLayout(content, SheetFront.of(result, content, charts), charts.subList(
-                Math.min(1, charts.size()), charts.size()));
+                Math.min(1, charts.size()), charts.size()), uncertainty);
     }
 
     /** The layout of a comparison sheet. */

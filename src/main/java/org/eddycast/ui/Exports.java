@@ -17,11 +17,13 @@ import javax.swing.Action;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.plugin.HostContext;
 import org.eddycast.sheet.ChartRendering;
+import org.eddycast.sheet.SensitivityChart;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.CurveCsv;
 import org.eddycast.sheet.SummarySheetPdf;
 import org.eddycast.sheet.SummarySheetPrintable;
 import org.eddycast.scenario.AtomicFiles;
+import org.eddycast.uncertainty.UncertaintySummary;
 import org.jfree.svg.SVGGraphics2D;
 
 /** The panel's outputs: the summary sheet (PDF, print), the charts (PNG, SVG) and the curves (CSV). */
@@ -101,13 +103,13 @@ final class Exports {
     Action chartPng() {
         return needingResult(EddycastPanel.action("Export charts (PNG)\u2026", KeyEvent.VK_G, null,
                 () -> withResult(r -> host.chooseFileToSave("Charts as PNG", "png", suggest.apply("-charts.png"))
-                        .ifPresent(p -> guarded(p, () -> writePng(view.charts(), p))))));
+                        .ifPresent(p -> guarded(p, () -> writePng(view.charts(), view.uncertainty(), p))))));
     }
 
     Action chartSvg() {
         return needingResult(EddycastPanel.action("Export charts (SVG)\u2026", KeyEvent.VK_V, null,
                 () -> withResult(r -> host.chooseFileToSave("Charts as SVG", "svg", suggest.apply("-charts.svg"))
-                        .ifPresent(p -> guarded(p, () -> writeSvg(view.charts(), p))))));
+                        .ifPresent(p -> guarded(p, () -> writeSvg(view.charts(), view.uncertainty(), p))))));
     }
 
     Action curvesCsv() {
@@ -116,35 +118,51 @@ final class Exports {
                         .ifPresent(p -> guarded(p, () -> AtomicFiles.writeString(p, CurveCsv.text(r)))))));
     }
 
-    /** The charts stacked in one PNG, 900 by 420 pixels each. */
-    static void writePng(List<ChartSpec> charts, Path target) throws IOException {
+    /**
+     * The charts stacked in one PNG, 900 by 420 pixels each, then the inputs' ranking when the result has an
+     * uncertainty part (null: none).
+     */
+    static void writePng(List<ChartSpec> charts, UncertaintySummary sensitivity, Path target) throws IOException {
         int w = 900;
         int h = 420;
-        BufferedImage img = new BufferedImage(w, h * Math.max(1, charts.size()), BufferedImage.TYPE_INT_RGB);
+        BufferedImage img = new BufferedImage(w, totalHeight(charts, sensitivity, h), BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
-            draw(charts, g, w, h);
+            draw(charts, sensitivity, g, w, h);
         } finally {
             g.dispose();
         }
         AtomicFiles.write(target, out -> ImageIO.write(img, "png", out));
     }
 
-    /** The charts stacked in one SVG document. */
-    static void writeSvg(List<ChartSpec> charts, Path target) throws IOException {
+    /** The charts stacked in one SVG document, then the inputs' ranking when there is one (null: none). */
+    static void writeSvg(List<ChartSpec> charts, UncertaintySummary sensitivity, Path target) throws IOException {
         int w = 900;
         int h = 420;
-        SVGGraphics2D g = new SVGGraphics2D(w, h * Math.max(1, charts.size()));
-        draw(charts, g, w, h);
+        SVGGraphics2D g = new SVGGraphics2D(w, totalHeight(charts, sensitivity, h));
+        draw(charts, sensitivity, g, w, h);
         AtomicFiles.writeString(target, g.getSVGDocument());
     }
 
-    private static void draw(List<ChartSpec> charts, Graphics2D g, int w, int h) {
+    private static boolean ranked(UncertaintySummary sensitivity) {
+        return sensitivity != null && !sensitivity.sensitivity().isEmpty();
+    }
+
+    private static int totalHeight(List<ChartSpec> charts, UncertaintySummary sensitivity, int h) {
+        int height = h * charts.size() + (ranked(sensitivity) ? h : 0);
+        return Math.max(h, height);
+    }
+
+    private static void draw(List<ChartSpec> charts, UncertaintySummary sensitivity, Graphics2D g, int w, int h) {
         g.setColor(java.awt.Color.WHITE);
-        g.fillRect(0, 0, w, h * Math.max(1, charts.size()));
+        g.fillRect(0, 0, w, totalHeight(charts, sensitivity, h));
         Font font = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
         for (int i = 0; i < charts.size(); i++) {
             ChartRendering.draw(charts.get(i), ChartRendering.PAPER, font, g, new Rectangle2D.Double(0, i * h, w, h));
+        }
+        if (ranked(sensitivity)) {
+            SensitivityChart.draw(sensitivity, ChartRendering.PAPER, font, g,
+                    new Rectangle2D.Double(0, charts.size() * h, w, h));
         }
     }
 

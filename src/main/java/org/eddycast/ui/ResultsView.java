@@ -24,6 +24,7 @@ import org.eddycast.report.ChartSpecs;
 import org.eddycast.report.Headline;
 import org.eddycast.report.SpreadCurves;
 import org.eddycast.report.SummaryContent;
+import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
  * The results side: the answer on top, then one row of tabs grouped by what a user looks for (the forecast
@@ -72,6 +73,8 @@ final class ResultsView extends JPanel {
     private List<String> preflightWarnings = List.of();
     private final HeadlinePanel headline = new HeadlinePanel();
     private final OptionsView options = new OptionsView();
+    /** Heads the inputs tab while the result has an uncertainty part; hidden otherwise. */
+    private final SensitivityView sensitivity = new SensitivityView();
     private boolean movedToQuality;
     /** The tabs whose page scrolls: each shows its top again for a new result. */
     private final List<JScrollPane> pages = new ArrayList<>();
@@ -104,9 +107,12 @@ final class ResultsView extends JPanel {
         addTab("Run quality", KeyEvent.VK_Q, column(quality, qualityNotes),
                 "Whether the simulation ran long enough: the running estimate levelling off, the cloud's spread, "
                         + "the measured record's spectrum, and any warnings");
-        addTab("Inputs and cautions", KeyEvent.VK_I, scrolled(column(heading("Inputs"), inputsTable.scroll(),
-                reasoning)), "The inputs this result was computed from, how each value was obtained, and the "
-                + "cautions");
+        JPanel inputsPage = column(sensitivity, heading("Inputs"), inputsTable.scroll(), reasoning);
+        ((MigLayout) inputsPage.getLayout()).setComponentConstraints(sensitivity, "wmin 10, hidemode 3");
+        sensitivity.setVisible(false);
+        addTab("Inputs and cautions", KeyEvent.VK_I, scrolled(inputsPage), "The inputs this result was computed "
+                + "from, how each value was obtained, and the cautions; with ranged inputs, how sure the answer "
+                + "is and which input to measure better");
         addTab("Options", KeyEvent.VK_O, options, "Design options kept with Ctrl+K, compared side by side");
         add(tabs, BorderLayout.CENTER);
         showEmpty();
@@ -171,6 +177,27 @@ final class ResultsView extends JPanel {
 
     JTabbedPane tabs() {
         return tabs;
+    }
+
+    /**
+     * Shows how sure the answer is under uncertain inputs at the head of the inputs tab, or hides that section
+     * when the result has no uncertainty part (null).
+     */
+    void showUncertainty(UncertaintySummary u) {
+        if (u != null) {
+            sensitivity.show(u);
+        }
+        sensitivity.setVisible(u != null);
+        revalidate();
+    }
+
+    /** The uncertainty part on view, or null. */
+    UncertaintySummary uncertainty() {
+        return sensitivity.isVisible() ? sensitivity.summary() : null;
+    }
+
+    SensitivityView sensitivity() {
+        return sensitivity;
     }
 
     /** The charts currently available (for export). */
@@ -259,6 +286,7 @@ final class ResultsView extends JPanel {
         handbookNotes.setText("");
         qualityNotes.setText("");
         reasoning.setText(cautionsText(List.of(), Cautions.ALL));
+        showUncertainty(null);
     }
 
     /** Curves so far while a run is going. */

@@ -209,6 +209,11 @@ class PanelRunTest {
      * window.
      */
     static void noLabelCutOff(EddycastPanel panel, String theme, int tab) throws Exception {
+        noLabelCutOff(panel, theme, tab, "1024-tab" + tab + "-" + theme);
+    }
+
+    /** The same check, its screenshot named panel-SHOT.png. */
+    static void noLabelCutOff(EddycastPanel panel, String theme, int tab, String shot) throws Exception {
         List<String> cut = new java.util.ArrayList<>();
         onEdt(() -> {
             panel.results().tabs().setSelectedIndex(tab);
@@ -223,7 +228,7 @@ class PanelRunTest {
                 cut.add("the last tab lies outside the window: " + last + " in " + tabs.getWidth());
             }
         });
-        shot(panel, "1024-tab" + tab + "-" + theme, SMALL);
+        shot(panel, shot, SMALL);
         assertTrue(cut.isEmpty(), () -> "tab " + tab + ", " + theme + ": cut off at 1024 x 700: " + cut);
     }
 
