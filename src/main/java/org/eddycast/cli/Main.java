@@ -14,7 +14,8 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "eddycast", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Screening forecasts of tracer spreading in turbulent tanks and channels.",
-        subcommands = {RunCommand.class, CompareCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class, MemoryCommand.class})
+        subcommands = {RunCommand.class, CompareCommand.class, AnalyzeCommand.class, CheckCommand.class, BenchCommand.class, MemoryCommand.class,
+            SweepCommand.class})
 public final class Main implements Runnable, CommandLine.IExitCodeGenerator {
 
     /** Exit status for bad input. */

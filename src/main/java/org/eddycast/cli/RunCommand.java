@@ -3,9 +3,9 @@ package org.eddycast.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.particles.Cancellation;
+import org.eddycast.propagation.UncertaintyStudy;
 import org.eddycast.report.CurveCsv;
 import org.eddycast.report.ResultJson;
 import org.eddycast.report.TextSummary;
@@ -57,7 +57,7 @@ final class RunCommand implements Callable<Integer> {
         ProgressPrinter progress = ProgressPrinter.start(err);
         StudyResult result;
         try {
-            result = Engine.run(scenario, threads.resolve(), progress, new Cancellation());
+            result = UncertaintyStudy.run(scenario, threads.resolve(), progress, new Cancellation());
         } finally {
             progress.finish();
         }

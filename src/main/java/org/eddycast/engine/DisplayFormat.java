@@ -28,6 +28,22 @@ public final class DisplayFormat {
         return units.time(seconds);
     }
 
+    /**
+     * A value given in an SI unit, in the display unit that unit maps to: kg/m^3 as a concentration, s as a
+     * time, m as a distance; any other unit as it is.
+     */
+    public String ofUnit(String siUnit, double v) {
+        if (!Double.isFinite(v)) {
+            return "not determined";
+        }
+        return switch (siUnit) {
+            case "kg/m^3" -> concentration(v);
+            case "s" -> time(v);
+            case "m" -> distance(v);
+            default -> round(v) + " " + siUnit;
+        };
+    }
+
     /** A distance (m) with its unit, e.g. "200 m". */
     public String distance(double metres) {
         return round(units.distance(metres)) + " " + units.distance();

@@ -124,22 +124,38 @@ public final class Engine {
      */
     public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel,
                                   boolean transportStage) {
+        return run(s, threads, listener, cancel, transportStage, SimulationCache.shared()::run);
+    }
+
+    /** How a run obtains its field stage's result for a dimensionless case: simulated, or reused and rescaled. */
+    @FunctionalInterface
+    public interface FieldStage {
+        /** The field stage's result for the case. */
+        DiffusivityResult run(DimensionlessCase c, int threads, RunListener listener, Cancellation cancel);
+    }
+
+    /**
+     * Runs a scenario with a given source of field-stage results (a sweep shares them between its runs in a way
+     * that does not depend on which runs a process makes).
+     */
+    public static StudyResult run(Scenario s, int threads, RunListener listener, Cancellation cancel,
+                                  boolean transportStage, FieldStage field) {
         ResolvedFlow flow = resolve(s);
         DimensionlessCase c = CaseBuilder.build(s, flow.turbulence());
         List<String> preflight = preflight(s, c);
         boolean staged = transportStage && (s.flow() instanceof ChannelFlow || s.flow() instanceof TankFlow);
         double fieldShare = staged ? FIELD_SHARE : 1.0;
-        DiffusivityResult r = SimulationCache.shared().run(c, threads,
+        DiffusivityResult r = field.run(c, threads,
                 (fraction, partial) -> listener.progress(fieldShare * fraction, partial), cancel);
         // a forecast from a diffusivity that is not determined (negative, or not a number) would be nonsense
         boolean determined = r.axes().stream().allMatch(AxisEstimate::determined);
         if (!determined) {
             return new StudyResult(s, flow, r, null, ToolVersion.get(), Instant.now(), preflight, null,
-                    AnswerBuilder.build(s, r, null));
+                    AnswerBuilder.build(s, r, null), null);
         }
         TransportResult transport = !staged ? null : TransportStudy.run(s, flow, r, threads,
                 fraction -> listener.progress(fieldShare + (1 - fieldShare) * fraction, null), cancel);
         return new StudyResult(s, flow, r, ForecastBuilder.build(s, flow, r, transport), ToolVersion.get(),
-                Instant.now(), preflight, transport, AnswerBuilder.build(s, r, transport));
+                Instant.now(), preflight, transport, AnswerBuilder.build(s, r, transport), null);
     }
 }

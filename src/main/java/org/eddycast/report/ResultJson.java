@@ -87,6 +87,9 @@ public final class ResultJson {
         }
         ArrayNode flowWarnings = root.putArray("flowWarnings");
         study.flow().warnings().forEach(flowWarnings::add);
+        if (study.uncertainty() != null) {
+            UncertaintyJson.write(root, study.uncertainty());
+        }
         return root;
     }
 

@@ -22,10 +22,16 @@ public final class TextSummary {
         if (s.answers() != null) {
             sb.append(s.answers().headline()).append('\n');
         }
+        if (s.uncertainty() != null) {
+            sb.append(UncertaintyText.headlineLine(s.uncertainty(), s.scenario().forecast().units())).append('\n');
+        }
         sb.append(String.format(Locale.ROOT, "eddycast %s, seed %d: %s%n", s.toolVersion(),
                 s.scenario().simulation().seed(), Printable.escape(s.scenario().name())));
         if (s.answers() != null) {
             AnswersText.append(sb, s.answers());
+        }
+        if (s.uncertainty() != null) {
+            UncertaintyText.append(sb, s.uncertainty(), s.scenario().forecast().units());
         }
         for (String w : s.preflight()) {
             sb.append("  WARNING (before the run): ").append(w).append('\n');

@@ -95,9 +95,12 @@ public final class ScenarioReader {
         Release release = releaseNode == null ? Release.defaults() : readRelease(releaseNode);
         FieldReader forecastNode = top.object("forecast", false);
         ForecastSettings forecast = forecastNode == null ? ForecastSettings.defaults() : readForecast(forecastNode);
+        FieldReader uncertaintyNode = top.object("uncertainty", false);
+        UncertaintySettings uncertainty = uncertaintyNode == null ? UncertaintySettings.none()
+                : UncertaintyReader.read(uncertaintyNode, root);
         top.rejectUnknown();
         for (FieldReader section : new FieldReader[] {flowNode, substanceNode, simulationNode, releaseNode,
-                forecastNode}) {
+                forecastNode, uncertaintyNode}) {
             if (section != null) {
                 section.rejectUnknown();
             }
@@ -105,7 +108,8 @@ public final class ScenarioReader {
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
-        Scenario scenario = new Scenario(version, name, description, flow, substance, release, forecast, simulation);
+        Scenario scenario = new Scenario(version, name, description, flow, substance, release, forecast, simulation,
+                uncertainty);
         List<String> placement = ReleasePlacement.problems(scenario);
         if (!placement.isEmpty()) {
             throw new ScenarioException(placement);

@@ -55,6 +55,9 @@ public final class ScenarioWriter {
         forecast.put("edgeFraction", s.forecast().edgeFraction());
         stations(forecast, s.forecast());
         simulation(root.putObject("simulation"), s.simulation());
+        if (s.uncertainty().ranged()) {
+            uncertainty(root.putObject("uncertainty"), s.uncertainty());
+        }
         return root;
     }
 
@@ -201,6 +204,42 @@ public final class ScenarioWriter {
             p.put("y", r.position()[1]);
             p.put("z", r.position()[2]);
         }
+    }
+
+    private static void uncertainty(ObjectNode n, UncertaintySettings u) {
+        com.fasterxml.jackson.databind.node.ArrayNode list = n.putArray("ranges");
+        for (InputRange r : u.ranges()) {
+            ObjectNode item = list.addObject();
+            item.put("input", r.input());
+            switch (r.shape()) {
+                case PLUS_MINUS -> item.put("plusMinus", r.a());
+                case UNIFORM -> {
+                    item.put("low", r.a());
+                    item.put("high", r.b());
+                }
+                case TRIANGULAR -> {
+                    item.put("distribution", "triangular");
+                    item.put("low", r.a());
+                    item.put("mode", r.b());
+                    item.put("high", r.c());
+                }
+                case NORMAL -> {
+                    item.put("distribution", "normal");
+                    item.put("mean", r.a());
+                    item.put("sd", r.b());
+                }
+                case LOG_NORMAL -> {
+                    item.put("distribution", "log-normal");
+                    item.put("median", r.a());
+                    item.put("geometricSd", r.b());
+                }
+            }
+            if (!r.basis().isEmpty()) {
+                item.put("basis", r.basis());
+            }
+        }
+        n.put("baseSamples", u.baseSamples());
+        n.put("particles", u.particles());
     }
 
     private static void simulation(ObjectNode n, SimulationSettings s) {

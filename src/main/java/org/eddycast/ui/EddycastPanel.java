@@ -60,7 +60,7 @@ public final class EddycastPanel implements ToolPanel {
     private String documentName = "untitled";
     private boolean modified;
     private int threads = Engine.defaultThreads();
-    private StudyWorker.Runner runner = Engine::run;
+    private StudyWorker.Runner runner = org.eddycast.propagation.UncertaintyStudy::run;
     /** True when the form was edited after the result on view was made. */
     private boolean changedSinceResult;
 
