@@ -30,6 +30,8 @@ import org.jfree.data.statistics.DefaultStatisticalCategoryDataset;
  * The inputs ranked by their share of the main figure's variance, as horizontal bars: for each input its
  * first-order index (the share it explains alone) beside its total index (the share including its
  * interactions), each with a whisker over its 95% interval, the input with the largest total index on top.
+ * The axis runs from 0 to 1, widened to take the intervals in but never beyond -0.5 and 1.5: a whisker cut
+ * there belongs to a design too small to rank its inputs, and the tables give its numbers.
  * The title names the figure; the advice sentence stands under the chart. Drawn in any
  * {@link ChartRendering.Palette}, so the window (light or dark theme), the exports and the sheet show the same
  * ranking. Works headless.
@@ -39,6 +41,9 @@ public final class SensitivityChart {
     /** The legend's words for the two bars. */
     static final String FIRST = "first-order index (the input alone)";
     static final String TOTAL = "total index (with its interactions)";
+
+    /** How far beyond 0 and 1 the axis goes at most, however wide an interval. */
+    static final double AXIS_LIMIT = 0.5;
 
     private SensitivityChart() {
     }
@@ -77,8 +82,11 @@ public final class SensitivityChart {
         inputs.setCategoryMargin(0.3);
         inputs.setMaximumCategoryLabelWidthRatio(0.45f);
         NumberAxis share = new NumberAxis("share of the variance (Sobol index); whiskers: 95% interval");
+        // an index is a share from 0 to 1; a small design's wide intervals are cut at AXIS_LIMIT beyond that
+        low = Math.max(-AXIS_LIMIT, low);
+        high = Math.min(1 + AXIS_LIMIT, high);
         share.setRange(low, high);
-        share.setTickUnit(new NumberTickUnit(0.1));
+        share.setTickUnit(new NumberTickUnit(tickStep(high - low)));
         share.setLabelFont(small);
         share.setTickLabelFont(small);
         share.setLabelPaint(palette.foreground());
@@ -125,7 +133,19 @@ public final class SensitivityChart {
 
     /** A height that gives each input's pair of bars room: points on paper, pixels on screen. */
     public static double preferredHeight(UncertaintySummary u) {
-        return Math.min(420, 130 + 34 * u.sensitivity().size());
+        return Math.min(460, 170 + 36 * u.sensitivity().size());
+    }
+
+    /** A step of 1, 2 or 5 times a power of ten giving five to ten ticks over the span. */
+    static double tickStep(double span) {
+        double raw = span / 10;
+        double power = Math.pow(10, Math.floor(Math.log10(raw)));
+        for (double m : new double[] {1, 2, 5}) {
+            if (m * power >= raw) {
+                return m * power;
+            }
+        }
+        return 10 * power;
     }
 
     /** Draws the chart into an area of a Graphics2D (a PDF page, an image or an SVG document). */

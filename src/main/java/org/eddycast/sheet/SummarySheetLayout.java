@@ -51,8 +51,14 @@ public final class SummarySheetLayout {
     private final List<String> pageOne = new ArrayList<>();
     private final String title;
     private final String toolVersion;
-    /** The inputs' ranking under uncertain inputs, or null; drawn on page 1 when it fits, else on page 2. */
+    /** The inputs' ranking under uncertain inputs, or null. */
     private final Block ranking;
+    /**
+     * The section on uncertain inputs (heading, the figures' two intervals, the ranking), empty without an
+     * uncertainty part: on page 1 when it fits, else at the top of page 2 with the advice left on page 1.
+     */
+    private final List<Block> uncertaintySection = new ArrayList<>();
+    private final String advice;
 
     /**
      * @param content the sheet's text
@@ -75,6 +81,16 @@ public final class SummarySheetLayout {
                               UncertaintySummary uncertainty) {
         ranking = uncertainty == null || uncertainty.sensitivity().isEmpty() ? null
                 : rankingChart(uncertainty, PAGE_WIDTH - 2 * MARGIN);
+        advice = uncertainty == null ? "" : uncertainty.advice();
+        if (uncertainty != null) {
+            uncertaintySection.add(heading("Uncertain inputs: how wide the answer is, and which input to measure "
+                    + "better"));
+            uncertaintySection.add(table(UncertaintyTables.figures(uncertainty), null, PAGE_WIDTH - 2 * MARGIN,
+                    SMALL));
+            if (ranking != null) {
+                uncertaintySection.add(ranking);
+            }
+        }
         String name = content.scenarioName().length() > 60 ? content.scenarioName().substring(0, 57) + "..."
                 : content.scenarioName();
         footer = "eddycast " + content.toolVersion() + " \u2014 " + name + " \u2014 "
@@ -86,9 +102,10 @@ public final class SummarySheetLayout {
         List<ChartSpec> detailCharts = charts.subList(0, Math.min(MAX_CHARTS, charts.size()));
         // charts shrink in steps until the last page is not nearly empty (or they reach their smallest)
         List<List<Block>> detail = List.of();
-        Block detailRanking = ranking != null && !pages.get(0).contains(ranking) ? ranking : null;
+        List<Block> detailUncertainty = pages.get(0).containsAll(uncertaintySection) ? List.of()
+                : uncertaintySection;
         for (double chartHeight = 300; chartHeight >= 180; chartHeight -= 20) {
-            detail = paginate(detailBlocks(content, detailCharts, detailRanking, width, chartHeight));
+            detail = paginate(detailBlocks(content, detailCharts, detailUncertainty, width, chartHeight));
             if (detail.isEmpty() || fill(detail.get(detail.size() - 1)) >= NEARLY_EMPTY || detail.size() == 1
                     && detailCharts.isEmpty()) {
                 break;
@@ -138,6 +155,12 @@ public final class SummarySheetLayout {
         top.add(heading("Question"));
         top.add(text(front.question(), BODY, width, 4));
         top.add(answerBox(front, width));
+        // the advice under the answer, unless the whole section on uncertain inputs fits further down
+        Block adviceLine = advice.isBlank() ? null
+                : text(advice + " The figures' ranges and the inputs' ranking: page 2.", BODY, width, 4);
+        if (adviceLine != null) {
+            top.add(adviceLine);
+        }
         if (!front.keyInputs().isEmpty()) {
             top.add(heading("Key inputs"));
             top.add(table(pairs(front.keyInputs()), PAIR_COLUMNS, width, BODY));
@@ -174,11 +197,13 @@ public final class SummarySheetLayout {
         }
         double room = usable - sum(page) - sum(bottom);
         double frontChartMin = front.chart() == null ? 0 : 130;
-        if (ranking != null && room - RANKING_HEADING.height() - ranking.height() >= frontChartMin) {
-            page.add(RANKING_HEADING);
-            page.add(ranking);
-            room -= RANKING_HEADING.height() + ranking.height();
+        double freed = adviceLine == null ? 0 : adviceLine.height();
+        if (!uncertaintySection.isEmpty() && room + freed - sum(uncertaintySection) >= frontChartMin) {
+            page.remove(adviceLine);
+            page.addAll(uncertaintySection);
+            room += freed - sum(uncertaintySection);
         }
+
         if (front.chart() != null && room >= 120) {
             page.add(chart(front.chart(), width, Math.min(260, room - 8)));
         }
@@ -186,6 +211,9 @@ public final class SummarySheetLayout {
         pageOne.add(front.question());
         pageOne.add(front.answer());
         pageOne.addAll(front.figures());
+        if (!advice.isBlank()) {
+            pageOne.add(advice);
+        }
         pageOne.addAll(content.cautions());
         return page;
     }
@@ -238,14 +266,10 @@ public final class SummarySheetLayout {
         return new SummaryContent.Table(List.of("input", "value", "input", "value"), out);
     }
 
-    private static List<Block> detailBlocks(SummaryContent content, List<ChartSpec> charts, Block ranking,
+    private static List<Block> detailBlocks(SummaryContent content, List<ChartSpec> charts, List<Block> uncertainty,
                                             double width, double chartHeight) {
-        List<Block> blocks = new ArrayList<>();
-        if (ranking != null) {
-            // what did not fit on page 1 opens page 2
-            blocks.add(RANKING_HEADING);
-            blocks.add(ranking);
-        }
+        // the section on uncertain inputs, when it did not fit on page 1, opens page 2
+        List<Block> blocks = new ArrayList<>(uncertainty);
         if (!content.sideBySide().isEmpty()) {
             blocks.add(heading("Verdict in full"));
             blocks.add(text(content.verdict(), BODY, width, 4));
@@ -375,9 +399,9 @@ public final class SummarySheetLayout {
         double used = 0;
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
-            // keep a heading with what follows it
+            // keep a heading with what follows it: blocks are never split, so with all of it when that fits a page
             double need = b.height() + ((b instanceof Heading || b instanceof Caption) && i + 1 < blocks.size()
-                    ? Math.min(blocks.get(i + 1).height(), 60) : 0);
+                    ? Math.min(blocks.get(i + 1).height(), usable - b.height()) : 0);
             if (used + need > usable && !page.isEmpty()) {
                 pages.add(page);
                 page = new ArrayList<>();
@@ -576,11 +600,9 @@ public final class SummarySheetLayout {
         return lines;
     }
 
-    private static final Heading RANKING_HEADING = new Heading("Which input to measure better (uncertain inputs)");
-
     /** The inputs' ranking with the advice under it, sized to the number of inputs. */
     private static Block rankingChart(UncertaintySummary u, double width) {
-        return drawing(Math.min(320, 110 + 26 * u.sensitivity().size()),
+        return drawing(Math.min(340, 150 + 28 * u.sensitivity().size()),
                 (g, area) -> SensitivityChart.draw(u, ChartRendering.PAPER, BODY, g, area));
     }
 

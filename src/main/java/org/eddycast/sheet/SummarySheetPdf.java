@@ -17,7 +17,6 @@ import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.util.Matrix;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.scenario.AtomicFiles;
-import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
  * Writes the summary sheet as PDF: the {@link SummarySheetLayout} drawn through a Graphics2D bridge, so charts
@@ -33,17 +32,15 @@ public final class SummarySheetPdf {
         write(layout(result), target);
     }
 
-    /** The layout of one study's sheet (for the PDF and the printer). */
+    /**
+     * The layout of one study's sheet (for the PDF and the printer), with the inputs' ranking when the study
+     * ranged its inputs.
+     */
     public static SummarySheetLayout layout(StudyResult result) {
-        return layout(result, null);
-    }
-
-    /** The layout of one study's sheet with its uncertainty part (null: none). */
-    public static SummarySheetLayout layout(StudyResult result, UncertaintySummary uncertainty) {
         SummaryContent content = SummaryContent.of(result);
         List<ChartSpec> charts = defaultCharts(result);
         return new SummarySheetLayout(content, SheetFront.of(result, content, charts), charts.subList(
-                Math.min(1, charts.size()), charts.size()), uncertainty);
+                Math.min(1, charts.size()), charts.size()), result.uncertainty());
     }
 
     /** The layout of a comparison sheet. */

@@ -345,6 +345,7 @@ final class ResultsView extends JPanel {
         headline.show(Headline.of(s), null);
         reasoning.setText(cautionsText(content.assumptions(), content.cautions()));
         reasoning.setCaretPosition(0);
+        showUncertainty(s.uncertainty());
         List<String> warnings = new ArrayList<>(s.flow().warnings());
         warnings.addAll(r.warnings());
         qualityNotes.setText(warnings.isEmpty() ? "No warnings: the running estimate settled within the run."

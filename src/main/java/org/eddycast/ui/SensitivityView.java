@@ -8,18 +8,16 @@ import java.util.Locale;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import net.miginfocom.swing.MigLayout;
-import org.eddycast.report.SummaryContent;
 import org.eddycast.sheet.SensitivityChart;
+import org.eddycast.sheet.UncertaintyTables;
 import org.eddycast.uncertainty.UncertaintySummary;
-import org.eddycast.uncertainty.UncertaintySummary.FigureRange;
-import org.eddycast.uncertainty.UncertaintySummary.RangedInput;
-import org.eddycast.uncertainty.UncertaintySummary.SensitivityIndex;
 import org.jfree.chart.ChartPanel;
 
 /**
- * How sure the answer is once the inputs are uncertain (the head of the results' inputs tab): the inputs ranked by their share of the main figure's
- * variance (a {@link SensitivityChart} in the theme's colours, the advice under it), each headline figure's two
- * intervals side by side, and the ranged inputs with their indices as numbers.
+ * How sure the answer is once the inputs are uncertain, at the head of the results' inputs tab: the inputs
+ * ranked by their share of the main figure's variance (a {@link SensitivityChart} in the theme's colours, the
+ * advice under it), each headline figure's two intervals side by side, and the ranged inputs with their
+ * indices as numbers.
  */
 final class SensitivityView extends JPanel {
 
@@ -51,8 +49,8 @@ final class SensitivityView extends JPanel {
     void show(UncertaintySummary u) {
         summary = u;
         drawChart();
-        figures.show(figureTable(u));
-        inputs.show(inputTable(u));
+        figures.show(UncertaintyTables.figures(u));
+        inputs.show(UncertaintyTables.inputs(u));
         List<String> lines = new ArrayList<>();
         lines.add(String.format(Locale.ROOT, "%d runs of %d particles each: a Saltelli design of %d base samples "
                         + "over %d ranged inputs (Saltelli et al. 2010). The Monte Carlo interval covers the "
@@ -113,33 +111,5 @@ final class SensitivityView extends JPanel {
         chartHolder.add(p, BorderLayout.CENTER);
         chartHolder.revalidate();
         chartHolder.repaint();
-    }
-
-    static SummaryContent.Table figureTable(UncertaintySummary u) {
-        List<List<String>> rows = new ArrayList<>();
-        for (FigureRange f : u.figures()) {
-            rows.add(List.of(f.label(), SummaryContent.number(f.nominal()),
-                    SummaryContent.number(f.mcLow()) + " to " + SummaryContent.number(f.mcHigh()),
-                    SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95()),
-                    SummaryContent.number(f.mean()), f.unit()));
-        }
-        return new SummaryContent.Table(List.of("figure", "single run", "Monte Carlo 95% interval",
-                "input range, 5th to 95th percentile", "mean over the inputs", "unit"), rows);
-    }
-
-    static SummaryContent.Table inputTable(UncertaintySummary u) {
-        List<List<String>> rows = new ArrayList<>();
-        for (SensitivityIndex s : SensitivityChart.ranked(u)) {
-            RangedInput in = u.inputs().stream().filter(i -> i.input().equals(s.input())).findFirst().orElse(null);
-            rows.add(List.of(s.input(), in == null ? "" : in.distribution(), index(s.first(), s.firstHalfWidth()),
-                    index(s.total(), s.totalHalfWidth()), in == null ? "" : in.basis()));
-        }
-        return new SummaryContent.Table(List.of("input", "range", "first-order index [95% interval]",
-                "total index [95% interval]", "basis of the range"), rows);
-    }
-
-    /** "0.31 [0.28, 0.34]": two lines in a table. */
-    static String index(double value, double halfWidth) {
-        return String.format(Locale.ROOT, "%.2f [%.2f, %.2f]", value, value - halfWidth, value + halfWidth);
     }
 }

@@ -29,9 +29,9 @@ import org.apache.commons.math3.stat.descriptive.rank.Percentile.EstimationType;
  * Sobol design it tends to overstate the error rather than understate it. The random stream is a
  * {@link SplittableRandom} from the caller's seed, so the same responses and seed give the same half-widths.
  *
- * <p>A constant response (the same value at every row of A and B, so V = 0) has no variance to share: every index and half-width is 0 and
- * {@link #note()} says why. Estimates may fall slightly below 0 or above 1 by sampling error; they are not
- * clipped.
+ * <p>A constant response (the same value at every row of A and B, so V = 0) has no variance to share: every
+ * index and half-width is 0 and {@link #note()} says why. Estimates may fall slightly below 0 or above 1 by
+ * sampling error; they are not clipped.
  */
 public final class SobolIndices {
 

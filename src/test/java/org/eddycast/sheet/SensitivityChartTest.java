@@ -59,6 +59,24 @@ class SensitivityChartTest {
     }
 
     @Test
+    void theAxisTakesTheIntervalsInWithinLimitsAndTicksStayApart() {
+        assertEquals(0.1, SensitivityChart.tickStep(1.0), 1e-12);
+        assertEquals(0.2, SensitivityChart.tickStep(2.0), 1e-12);
+        assertEquals(0.5, SensitivityChart.tickStep(3.0), 1e-12);
+        UncertaintySummary u = ExampleUncertainty.blendTimeStudy();
+        UncertaintySummary wide = new UncertaintySummary(u.inputs(), 4, 24, 256, u.figures(),
+                List.of(new SensitivityIndex("a", 0.7, 1.5, 1.3, 0.6), new SensitivityIndex("b", -0.04, 0.07, 0, 0)),
+                "", List.of());
+        org.jfree.chart.axis.ValueAxis axis = SensitivityChart.chart(wide, ChartRendering.PAPER, FONT)
+                .getCategoryPlot().getRangeAxis();
+        assertEquals(-0.5, axis.getLowerBound(), 0);
+        assertEquals(1.5, axis.getUpperBound(), 0);
+        axis = SensitivityChart.chart(u, ChartRendering.PAPER, FONT).getCategoryPlot().getRangeAxis();
+        assertEquals(0, axis.getLowerBound(), 0);
+        assertEquals(1, axis.getUpperBound(), 0);
+    }
+
+    @Test
     void noIndicesNoChart() {
         UncertaintySummary u = ExampleUncertainty.withoutRanking();
         assertThrows(IllegalArgumentException.class, () -> SensitivityChart.chart(u, ChartRendering.PAPER, FONT));

@@ -13,6 +13,7 @@ import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
+import org.eddycast.report.SummaryContent;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.uncertainty.ExampleUncertainty;
 import org.eddycast.uncertainty.UncertaintySummary;
@@ -51,10 +52,18 @@ class SensitivitySheetTest {
     @Test
     void aStudyWithAnUncertaintyPartShowsTheRankingAndTheAdvice() throws Exception {
         UncertaintySummary u = ExampleUncertainty.blendTimeStudy();
-        SummarySheetLayout layout = SummarySheetPdf.layout(result, u);
+        SummarySheetLayout layout = SummarySheetPdf.layout(result.withUncertainty(u));
         assertTrue(layout.rankingPage() == 0 || layout.rankingPage() == 1, "page " + layout.rankingPage());
         String text = pdfText(layout, "sheet-sensitivity.pdf");
-        assertTrue(text.contains("Which input to measure better"), "the section heading");
+        assertTrue(text.contains("Uncertain inputs: how wide the answer is"), "the section heading");
+        UncertaintySummary.FigureRange f = u.mainFigure();
+        assertTrue(text.contains(SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95())),
+                "the figure's input range");
+        assertTrue(text.contains(SummaryContent.number(f.mcLow()) + " to " + SummaryContent.number(f.mcHigh())),
+                "the figure's Monte Carlo interval beside it");
+        if (layout.rankingPage() == 1) {
+            assertTrue(layout.pageOneText().contains(u.advice()), "the advice stays on page 1");
+        }
         assertTrue(text.contains(SensitivityChart.title(u)), "the chart's title names the figure");
         for (UncertaintySummary.SensitivityIndex s : u.sensitivity()) {
             assertTrue(text.contains(s.input()), "input " + s.input());
@@ -64,10 +73,11 @@ class SensitivitySheetTest {
 
     @Test
     void aStudyWithoutOneHasNoRanking() throws Exception {
-        SummarySheetLayout layout = SummarySheetPdf.layout(result, null);
+        SummarySheetLayout layout = SummarySheetPdf.layout(result);
         assertEquals(-1, layout.rankingPage());
-        assertFalse(pdfText(layout, "sheet-no-sensitivity.pdf").contains("Which input to measure better"));
-        assertEquals(-1, SummarySheetPdf.layout(result, ExampleUncertainty.withoutRanking()).rankingPage(),
-                "no indices, no ranking");
+        assertFalse(pdfText(layout, "sheet-no-sensitivity.pdf").contains("Uncertain inputs"));
+        SummarySheetLayout unranked = SummarySheetPdf.layout(result.withUncertainty(
+                ExampleUncertainty.withoutRanking()));
+        assertEquals(-1, unranked.rankingPage(), "no indices, no ranking");
     }
 }

@@ -19,6 +19,7 @@ import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
+import org.eddycast.report.SummaryContent;
 import org.eddycast.scenario.ScenarioReader;
 import org.eddycast.sheet.SensitivityChart;
 import org.eddycast.uncertainty.ExampleUncertainty;
@@ -67,7 +68,7 @@ class SensitivityTabTest {
         assertNull(callEdt(view::uncertainty));
 
         UncertaintySummary u = ExampleUncertainty.blendTimeStudy();
-        onEdt(() -> view.showUncertainty(u));
+        onEdt(() -> view.showResult(result.withUncertainty(u)));
         assertTrue(callEdt(() -> view.sensitivity().isVisible()), "the section shows");
         assertEquals(tabs, (int) callEdt(() -> view.tabs().getTabCount()), "in the inputs tab, no new tab");
         assertNotNull(callEdt(() -> view.sensitivity().chartPanel()), "the ranking chart");
@@ -75,11 +76,12 @@ class SensitivityTabTest {
                 view.sensitivity().chartPanel().getChart().getBackgroundPaint(), "the chart follows the theme"));
         UncertaintySummary.FigureRange f = u.mainFigure();
         List<String> figureRow = callEdt(() -> view.sensitivity().figureRows().get(0));
-        assertEquals(List.of(f.label(), org.eddycast.report.SummaryContent.number(f.nominal())), figureRow.subList(0, 2));
-        assertTrue(figureRow.get(3).equals(org.eddycast.report.SummaryContent.number(f.p05()) + " to "
-                + org.eddycast.report.SummaryContent.number(f.p95())), figureRow.toString());
+        assertEquals(List.of(f.label(), SummaryContent.number(f.nominal())), figureRow.subList(0, 2));
+        assertEquals(SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95()), figureRow.get(3),
+                "the input range");
         List<List<String>> inputs = callEdt(() -> view.sensitivity().inputRows());
-        List<String> order = SensitivityChart.ranked(u).stream().map(UncertaintySummary.SensitivityIndex::input).toList();
+        List<String> order = SensitivityChart.ranked(u).stream()
+                .map(UncertaintySummary.SensitivityIndex::input).toList();
         assertEquals(order, inputs.stream().map(r -> r.get(0)).toList(), "largest total index first");
         for (String h : List.of("first-order index [95% interval]", "total index [95% interval]")) {
             assertNotNull(Glossary.definition(h), "no tooltip for the column " + h);
@@ -96,12 +98,12 @@ class SensitivityTabTest {
         assertEquals(420 * (callEdt(view::charts).size() + 1), img.getHeight());
 
         // figures without a ranking: the tab says so instead of drawing an empty chart
-        onEdt(() -> view.showUncertainty(ExampleUncertainty.withoutRanking()));
+        onEdt(() -> view.showResult(result.withUncertainty(ExampleUncertainty.withoutRanking())));
         assertNull(callEdt(() -> view.sensitivity().chartPanel()));
         assertNotNull(PanelRunTest.findNamed(panel.component(), "uncertainty.noRanking", javax.swing.JLabel.class));
 
         // a result without an uncertainty part takes the tab away again
-        onEdt(() -> view.showUncertainty(null));
+        onEdt(() -> view.showResult(result));
         assertTrue(!callEdt(() -> view.sensitivity().isVisible()), "the section is hidden again");
         assertNull(callEdt(view::uncertainty));
         prefs.removeNode();
