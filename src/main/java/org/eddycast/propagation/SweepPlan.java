@@ -120,6 +120,15 @@ public final class SweepPlan {
         return (int) ((long) rows() * k / n);
     }
 
+    /**
+     * The scenario of one row.
+     *
+     * @throws ScenarioException naming the row's inputs and values when they give a scenario that cannot run
+     */
+    public Scenario scenarioAt(int row) {
+        return sampler.at(point(row));
+    }
+
     /** The inputs' values at one row. */
     public double[] point(int row) {
         return row == centreRow() ? sampler.nominal() : design.point(row, distributions);
@@ -146,7 +155,7 @@ public final class SweepPlan {
             }
             int done = row - from;
             int count = to - from;
-            StudyResult r = Engine.run(sampler.at(point(row)), threads,
+            StudyResult r = Engine.run(scenarioAt(row), threads,
                     (fraction, partial) -> progress.accept((done + fraction) / count), cancel, true,
                     field.forRow(row));
             double[] values = new double[figures.size()];
@@ -170,11 +179,31 @@ public final class SweepPlan {
         if (cases != null) {
             return;
         }
+        checkTails();
         List<DimensionlessCase> made = new ArrayList<>(rows());
         for (int row = 0; row < rows(); row++) {
-            made.add(Engine.dimensionlessCase(sampler.at(point(row))));
+            made.add(Engine.dimensionlessCase(scenarioAt(row)));
         }
         cases = made;
+    }
+
+    /** The share of each tail a range must keep valid, whatever the sample happens to draw. */
+    static final double TAIL = 0.001;
+
+    /**
+     * Checks each input at its 0.1% and 99.9% quantiles, the others at their scenario values: a range whose tail
+     * reaches a value its input cannot take (a normal range on a length that reaches below zero) is refused even
+     * when a small sample would miss that tail.
+     */
+    private void checkTails() {
+        double[] nominal = sampler.nominal();
+        for (int i = 0; i < nominal.length; i++) {
+            for (double u : new double[] {TAIL, 1 - TAIL}) {
+                double[] point = nominal.clone();
+                point[i] = distributions.get(i).quantile(u);
+                sampler.at(point);
+            }
+        }
     }
 
     /** The figures' keys, in response order. */
