@@ -12,10 +12,13 @@ import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.engine.ToolVersion;
 import org.eddycast.particles.Cancellation;
+import org.eddycast.forecast.RuleSpreads;
 import org.eddycast.particles.RunCancelledException;
+import org.eddycast.scenario.InputRange;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioException;
 import org.eddycast.scenario.ScenarioWriter;
+import org.eddycast.scenario.TankFlow;
 import org.eddycast.uncertainty.InputDistribution;
 import org.eddycast.uncertainty.SaltelliDesign;
 
@@ -54,7 +57,7 @@ public final class SweepPlan {
         double[] nominal = sampler.nominal();
         for (int i = 0; i < nominal.length; i++) {
             try {
-                distributions.add(InputDistributions.of(sampler.ranges().get(i), nominal[i]));
+                distributions.add(InputDistributions.of(resolved(scenario, sampler.ranges().get(i)), nominal[i]));
             } catch (IllegalArgumentException e) {
                 throw new ScenarioException("uncertainty.ranges[" + i + "] (" + sampler.inputs().get(i) + "): "
                         + e.getMessage());
@@ -63,6 +66,25 @@ public final class SweepPlan {
         this.design = new SaltelliDesign(scenario.uncertainty().baseSamples(), nominal.length);
         this.figures = HeadlineFigure.forScenario(scenario);
         this.fingerprint = fingerprint(scenario);
+    }
+
+    /**
+     * A range as it is sampled: "the rule's spread" becomes the rule's stated plus-or-minus fraction, with the
+     * rule's basis where the user gave none.
+     *
+     * @throws ScenarioException when the input's rule states no spread
+     */
+    static InputRange resolved(Scenario s, InputRange r) {
+        if (r.shape() != InputRange.Shape.RULE) {
+            return r;
+        }
+        RuleSpreads.Spread spread = s.flow() instanceof TankFlow ? RuleSpreads.tank(r.input()) : null;
+        if (spread == null) {
+            throw new ScenarioException(r.input() + ": \"spread\": \"rule\" needs a rule that states its spread; "
+                    + "those that do: " + String.join(", ", new java.util.TreeSet<>(RuleSpreads.tankInputs()))
+                    + " (tanks). Give plusMinus, low and high, or a distribution instead");
+        }
+        return InputRange.plusMinus(r.input(), spread.fraction(), r.basis().isEmpty() ? spread.basis() : r.basis());
     }
 
     /** The scenario swept. */

@@ -17,6 +17,7 @@ import java.util.Locale;
  * flow.depth normal 1.2 0.05           (mean, standard deviation)
  * flow.powerNumber triangular 1.1 1.27 1.5   (low, mode, high)
  * flow.pumpingNumber log-normal 0.79 1.1     (median, geometric standard deviation)
+ * flow.powerNumber rule                (the spread the rule's source states)
  * </pre>
  * Text after {@code #} is the range's basis.
  */
@@ -63,12 +64,16 @@ final class RangeLines {
         ObjectNode o = JsonNodeFactory.instance.objectNode();
         o.put("input", w[0]);
         String usage = "write \"PATH +-10%\", \"PATH LOW to HIGH\", \"PATH normal MEAN SD\", "
-                + "\"PATH log-normal MEDIAN GSD\" or \"PATH triangular LOW MODE HIGH\"";
+                + "\"PATH log-normal MEDIAN GSD\", \"PATH triangular LOW MODE HIGH\" or \"PATH rule\"";
         if (w.length == 2 && (w[1].startsWith("+-") || w[1].startsWith("\u00b1"))) {
             String f = w[1].substring(w[1].startsWith("+-") ? 2 : 1);
             boolean percent = f.endsWith("%");
             double v = number(percent ? f.substring(0, f.length() - 1) : f, "the plus-or-minus");
             o.put("plusMinus", percent ? v / 100 : v);
+            return o;
+        }
+        if (w.length == 2 && w[1].equalsIgnoreCase("rule")) {
+            o.put("spread", "rule");
             return o;
         }
         if (w.length == 4 && w[2].equalsIgnoreCase("to")) {
@@ -126,7 +131,9 @@ final class RangeLines {
         for (JsonNode r : ranges) {
             sb.append(r.path("input").asText());
             String kind = r.path("distribution").asText("");
-            if (r.has("plusMinus")) {
+            if (r.has("spread")) {
+                sb.append(" rule");
+            } else if (r.has("plusMinus")) {
                 sb.append(" +-").append(ScenarioForm.shortNumber(100 * r.path("plusMinus").asDouble())).append('%');
             } else if (kind.equals("normal")) {
                 sb.append(" normal ").append(num(r, "mean")).append(' ').append(num(r, "sd"));

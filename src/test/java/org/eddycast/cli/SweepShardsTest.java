@@ -82,4 +82,42 @@ class SweepShardsTest {
         assertEquals(2, o.status());
         assertTrue(o.err().contains("--shard must be K/N"), o.err());
     }
+
+    @Test
+    void runOfAScenarioWithRangesGivesBothIntervalsAndTheRankingInTextAndJson(@TempDir Path dir) throws Exception {
+        Path scenario = dir.resolve("s.json");
+        Files.writeString(scenario, SCENARIO);
+        Path json = dir.resolve("r.json");
+        CommandLineTest.Outcome o = CommandLineTest.run("run", scenario.toString(), "--json", json.toString(),
+                "--threads", "2");
+        assertEquals(0, o.status(), o.err());
+        String[] lines = o.out().split("\n");
+        assertTrue(lines[1].startsWith("How sure: eddy diffusivity along x"), lines[1]);
+        assertTrue(lines[1].contains("particles' noise [") && lines[1].contains("over the inputs' ranges 5-95% ["),
+                lines[1]);
+        assertTrue(o.out().contains("share of the variance"), o.out());
+        JsonNode root = new ObjectMapper().readTree(json.toFile());
+        JsonNode x = root.path("eddyDiffusivity").path("x");
+        JsonNode range = x.path("inputRange");
+        assertTrue(range.path("p05").asDouble() < range.path("p95").asDouble(), x.toString());
+        // the Monte Carlo interval and the input range sit side by side, each with what it covers
+        assertTrue(x.has("low") && x.has("high"));
+        JsonNode figure = root.path("uncertainty").path("figures").path(0);
+        assertEquals(x.path("value").asDouble(), figure.path("value").asDouble(), 0.0);
+        assertTrue(figure.path("monteCarlo").path("covers").asText().contains("noise"));
+        assertTrue(figure.path("inputRange").path("covers").asText().contains("percentile"));
+        JsonNode sensitivity = root.path("sensitivity");
+        assertEquals(3, sensitivity.size());
+        for (int i = 1; i < sensitivity.size(); i++) {
+            assertTrue(sensitivity.path(i - 1).path("total").asDouble() >= sensitivity.path(i).path("total")
+                    .asDouble(), "ordered by total index");
+        }
+        // the mean velocity carries the tracer but does not enter the eddy diffusivity: its indices are zero
+        for (JsonNode s : sensitivity) {
+            if (s.path("input").asText().equals("flow.meanVelocity")) {
+                assertEquals(0.0, s.path("total").asDouble(), 0.0, s.toString());
+                assertEquals(0.0, s.path("first").asDouble(), 0.0, s.toString());
+            }
+        }
+    }
 }
