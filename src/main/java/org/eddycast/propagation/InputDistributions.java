@@ -27,6 +27,7 @@ final class InputDistributions {
             case TRIANGULAR -> new TriangularRange(r.a(), r.b(), r.c());
             case NORMAL -> new NormalRange(r.a(), r.b());
             case LOG_NORMAL -> new LogNormalRange(r.a(), r.b());
+            case RULE -> throw new IllegalArgumentException("a rule's spread is resolved before this");
         };
     }
 }

@@ -12,10 +12,13 @@ import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.engine.ToolVersion;
 import org.eddycast.particles.Cancellation;
+import org.eddycast.forecast.RuleSpreads;
 import org.eddycast.particles.RunCancelledException;
+import org.eddycast.scenario.InputRange;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioException;
 import org.eddycast.scenario.ScenarioWriter;
+import org.eddycast.scenario.TankFlow;
 import org.eddycast.uncertainty.InputDistribution;
 import org.eddycast.uncertainty.SaltelliDesign;
 
@@ -54,7 +57,7 @@ public final class SweepPlan {
         double[] nominal = sampler.nominal();
         for (int i = 0; i < nominal.length; i++) {
             try {
-                distributions.add(InputDistributions.of(sampler.ranges().get(i), nominal[i]));
+                distributions.add(InputDistributions.of(resolved(scenario, sampler.ranges().get(i)), nominal[i]));
             } catch (IllegalArgumentException e) {
                 throw new ScenarioException("uncertainty.ranges[" + i + "] (" + sampler.inputs().get(i) + "): "
                         + e.getMessage());
@@ -63,6 +66,25 @@ public final class SweepPlan {
         this.design = new SaltelliDesign(scenario.uncertainty().baseSamples(), nominal.length);
         this.figures = HeadlineFigure.forScenario(scenario);
         this.fingerprint = fingerprint(scenario);
+    }
+
+    /**
+     * A range as it is sampled: "the rule's spread" becomes the rule's stated plus-or-minus fraction, with the
+     * rule's basis where the user gave none.
+     *
+     * @throws ScenarioException when the input's rule states no spread
+     */
+    static InputRange resolved(Scenario s, InputRange r) {
+        if (r.shape() != InputRange.Shape.RULE) {
+            return r;
+        }
+        RuleSpreads.Spread spread = s.flow() instanceof TankFlow ? RuleSpreads.tank(r.input()) : null;
+        if (spread == null) {
+            throw new ScenarioException(r.input() + ": \"spread\": \"rule\" needs a rule that states its spread; "
+                    + "those that do: " + String.join(", ", new java.util.TreeSet<>(RuleSpreads.tankInputs()))
+                    + " (tanks). Give plusMinus, low and high, or a distribution instead");
+        }
+        return InputRange.plusMinus(r.input(), spread.fraction(), r.basis().isEmpty() ? spread.basis() : r.basis());
     }
 
     /** The scenario swept. */
@@ -120,6 +142,15 @@ public final class SweepPlan {
         return (int) ((long) rows() * k / n);
     }
 
+    /**
+     * The scenario of one row.
+     *
+     * @throws ScenarioException naming the row's inputs and values when they give a scenario that cannot run
+     */
+    public Scenario scenarioAt(int row) {
+        return sampler.at(point(row));
+    }
+
     /** The inputs' values at one row. */
     public double[] point(int row) {
         return row == centreRow() ? sampler.nominal() : design.point(row, distributions);
@@ -146,7 +177,7 @@ public final class SweepPlan {
             }
             int done = row - from;
             int count = to - from;
-            StudyResult r = Engine.run(sampler.at(point(row)), threads,
+            StudyResult r = Engine.run(scenarioAt(row), threads,
                     (fraction, partial) -> progress.accept((done + fraction) / count), cancel, true,
                     field.forRow(row));
             double[] values = new double[figures.size()];
@@ -170,11 +201,31 @@ public final class SweepPlan {
         if (cases != null) {
             return;
         }
+        checkTails();
         List<DimensionlessCase> made = new ArrayList<>(rows());
         for (int row = 0; row < rows(); row++) {
-            made.add(Engine.dimensionlessCase(sampler.at(point(row))));
+            made.add(Engine.dimensionlessCase(scenarioAt(row)));
         }
         cases = made;
+    }
+
+    /** The share of each tail a range must keep valid, whatever the sample happens to draw. */
+    static final double TAIL = 0.001;
+
+    /**
+     * Checks each input at its 0.1% and 99.9% quantiles, the others at their scenario values: a range whose tail
+     * reaches a value its input cannot take (a normal range on a length that reaches below zero) is refused even
+     * when a small sample would miss that tail.
+     */
+    private void checkTails() {
+        double[] nominal = sampler.nominal();
+        for (int i = 0; i < nominal.length; i++) {
+            for (double u : new double[] {TAIL, 1 - TAIL}) {
+                double[] point = nominal.clone();
+                point[i] = distributions.get(i).quantile(u);
+                sampler.at(point);
+            }
+        }
     }
 
     /** The figures' keys, in response order. */

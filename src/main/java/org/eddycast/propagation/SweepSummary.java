@@ -147,7 +147,7 @@ public final class SweepSummary {
         List<RangedInput> out = new ArrayList<>();
         double[] nominal = plan.nominal();
         for (int i = 0; i < nominal.length; i++) {
-            InputRange r = plan.scenario().uncertainty().ranges().get(i);
+            InputRange r = SweepPlan.resolved(plan.scenario(), plan.scenario().uncertainty().ranges().get(i));
             out.add(new RangedInput(r.input(), nominal[i], plan.distributions().get(i).describe(), r.basis()));
         }
         return out;

@@ -35,7 +35,9 @@ public final class UncertaintyJson {
             String place = PLACES.get(f.key());
             JsonNode target = place == null ? null : root.at(place);
             if (target instanceof ObjectNode o) {
-                inputRange(o.putObject("inputRange"), f);
+                ObjectNode range = o.putObject("inputRange");
+                range.put("figure", f.key());
+                inputRange(range, f);
             }
         }
     }

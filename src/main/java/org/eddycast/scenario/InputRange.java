@@ -7,7 +7,7 @@ package org.eddycast.scenario;
  * @param input the input's path in the scenario file, such as {@code flow.bedSlope} or
  *              {@code forecast.stations[0].distance}
  * @param shape how the parameters read
- * @param a     PLUS_MINUS: the fraction; UNIFORM and TRIANGULAR: the low end; NORMAL: the mean; LOG_NORMAL: the
+ * @param a     RULE: NaN (the rule gives the spread); PLUS_MINUS: the fraction; UNIFORM and TRIANGULAR: the low end; NORMAL: the mean; LOG_NORMAL: the
  *              median
  * @param b     UNIFORM: the high end; TRIANGULAR: the mode; NORMAL: the standard deviation; LOG_NORMAL: the
  *              geometric standard deviation; otherwise NaN
@@ -27,7 +27,9 @@ public record InputRange(String input, Shape shape, double a, double b, double c
         /** Normal with mean a and standard deviation b. */
         NORMAL,
         /** Log-normal with median a and geometric standard deviation b. */
-        LOG_NORMAL
+        LOG_NORMAL,
+        /** The spread the rule that gives the input states for it, read as a plus-or-minus fraction. */
+        RULE
     }
 
     /** A plus-or-minus fraction of the scenario's value. */

@@ -213,6 +213,7 @@ public final class ScenarioWriter {
             item.put("input", r.input());
             switch (r.shape()) {
                 case PLUS_MINUS -> item.put("plusMinus", r.a());
+                case RULE -> item.put("spread", "rule");
                 case UNIFORM -> {
                     item.put("low", r.a());
                     item.put("high", r.b());

@@ -62,6 +62,16 @@ final class UncertaintyReader {
         boolean plusMinus = item.has("plusMinus");
         boolean named = item.has("distribution");
         boolean pair = item.has("low") || item.has("high");
+        if (item.has("spread")) {
+            if (plusMinus || named || pair) {
+                item.problem(item.path() + ": \"spread\": \"rule\" takes the rule's own spread; remove the other "
+                        + "range fields, or remove spread");
+                item.acceptAll();
+                return null;
+            }
+            item.choice("spread", List.of("rule"), "rule", true);
+            return new InputRange(input, InputRange.Shape.RULE, Double.NaN, Double.NaN, Double.NaN, basis);
+        }
         if (plusMinus && (named || pair)) {
             item.problem(item.path() + ": give either plusMinus or a distribution (low/high, or \"distribution\" with "
                     + "its parameters), not both");

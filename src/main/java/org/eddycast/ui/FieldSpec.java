@@ -17,7 +17,7 @@ import java.util.List;
 public record FieldSpec(String path, Kind kind, String unit, String route, boolean optional, List<String> choices) {
 
     /** The kinds of value a field takes. */
-    public enum Kind { NUMBER, INTEGER, TEXT, CHOICE, FLAG }
+    public enum Kind { NUMBER, INTEGER, TEXT, CHOICE, FLAG, RANGES }
 
     public FieldSpec {
         choices = List.copyOf(choices);

@@ -64,6 +64,10 @@ public final class FormLayout {
                     FieldSpec.choice("forecast.widthMeasure", null, List.of("fwhm", "standard-deviation",
                             "visible-edge")),
                     FieldSpec.number("forecast.edgeFraction", "", null, true))),
+            new Section("section.uncertainty", List.of(
+                    new FieldSpec("uncertainty.ranges", FieldSpec.Kind.RANGES, "", null, true, List.of()),
+                    FieldSpec.integer("uncertainty.baseSamples", null, true),
+                    FieldSpec.integer("uncertainty.particles", null, true))),
             new Section("section.accuracy", List.of(
                     FieldSpec.integer("simulation.particles", null, true),
                     FieldSpec.number("simulation.precisionTarget", "", null, true),

@@ -431,8 +431,19 @@ public final class ScenarioForm extends JPanel {
                     }
                 }
                 case FLAG -> parent.put(row.spec.key(), Boolean.parseBoolean(text));
+                case RANGES -> {
+                    RangeLines.Parsed parsed = RangeLines.parse(text);
+                    if (!parsed.problems().isEmpty()) {
+                        problems.put(row.spec.path(), String.join("; ", parsed.problems()));
+                    } else if (!parsed.ranges().isEmpty()) {
+                        parent.set(row.spec.key(), parsed.ranges());
+                    }
+                }
                 default -> parent.put(row.spec.key(), text);
             }
+        }
+        if (tree.get("uncertainty") instanceof ObjectNode u && u.isEmpty()) {
+            tree.remove("uncertainty");
         }
         if (tree.path("release").isObject()) {
             ((ObjectNode) tree.get("release")).remove("atBank");
@@ -500,6 +511,7 @@ public final class ScenarioForm extends JPanel {
         final JLabel unit;
         final WrappingText problem = new WrappingText("problem");
         javax.swing.JButton browseButton;
+        javax.swing.JScrollPane scroll;
         private boolean shown = true;
 
         FieldRow(FieldSpec spec) {
@@ -525,6 +537,27 @@ public final class ScenarioForm extends JPanel {
                     JCheckBox b = new JCheckBox();
                     b.addActionListener(e -> changed());
                     yield b;
+                }
+                case RANGES -> {
+                    javax.swing.JTextArea a = new javax.swing.JTextArea(4, 24);
+                    a.getDocument().addDocumentListener(new DocumentListener() {
+                        @Override
+                        public void insertUpdate(DocumentEvent e) {
+                            changed();
+                        }
+
+                        @Override
+                        public void removeUpdate(DocumentEvent e) {
+                            changed();
+                        }
+
+                        @Override
+                        public void changedUpdate(DocumentEvent e) {
+                            changed();
+                        }
+                    });
+                    a.putClientProperty("JTextArea.placeholderText", "flow.bedSlope +-25%   # why");
+                    yield a;
                 }
                 default -> {
                     JTextField f = new JTextField(12);
@@ -567,7 +600,10 @@ public final class ScenarioForm extends JPanel {
 
         void addTo(JPanel p) {
             p.add(label);
-            if (spec.kind() == FieldSpec.Kind.CHOICE) {
+            if (spec.kind() == FieldSpec.Kind.RANGES) {
+                scroll = new javax.swing.JScrollPane(editor);
+                p.add(scroll, "span 2, wmin 60, hmin 70");
+            } else if (spec.kind() == FieldSpec.Kind.CHOICE) {
                 // a chooser has no unit: it takes the unit's column too, so its longest choice shows in full
                 p.add(editor, "span 2, wmin 60");
             } else if (spec.kind() == FieldSpec.Kind.TEXT && spec.path().equals("flow.record")) {
@@ -598,6 +634,9 @@ public final class ScenarioForm extends JPanel {
             if (browseButton != null) {
                 browseButton.setVisible(v);
             }
+            if (scroll != null) {
+                scroll.setVisible(v);
+            }
             if (!v) {
                 problem.setVisible(false);
             }
@@ -613,7 +652,7 @@ public final class ScenarioForm extends JPanel {
         }
 
         void setEditable(boolean e) {
-            if (editor instanceof JTextField f) {
+            if (editor instanceof javax.swing.text.JTextComponent f) {
                 f.setEditable(e);
             } else {
                 editor.setEnabled(e);
@@ -621,7 +660,7 @@ public final class ScenarioForm extends JPanel {
         }
 
         String text() {
-            if (editor instanceof JTextField f) {
+            if (editor instanceof javax.swing.text.JTextComponent f) {
                 return f.getText();
             }
             if (editor instanceof JCheckBox b) {
@@ -632,7 +671,7 @@ public final class ScenarioForm extends JPanel {
         }
 
         void setText(String t) {
-            if (editor instanceof JTextField f) {
+            if (editor instanceof javax.swing.text.JTextComponent f) {
                 f.setText(t);
                 // a long value shows its beginning, not its end
                 f.setCaretPosition(0);
@@ -652,7 +691,9 @@ public final class ScenarioForm extends JPanel {
                 }
                 return;
             }
-            if (v.isNumber() && spec.kind() == FieldSpec.Kind.NUMBER) {
+            if (spec.kind() == FieldSpec.Kind.RANGES) {
+                setText(RangeLines.format(v));
+            } else if (v.isNumber() && spec.kind() == FieldSpec.Kind.NUMBER) {
                 setText(shortNumber(v.asDouble()));
             } else {
                 setText(v.asText());
