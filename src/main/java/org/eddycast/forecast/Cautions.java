@@ -20,6 +20,26 @@ public final class Cautions {
             "Whether a tracer is harmful at the planned dose, and the protection of drinking-water intakes and"
                     + " other users downstream, are outside this tool: check them separately.");
 
+    /**
+     * The cautions in one line, for a place with room for no more (a results tab's footer); it always sits beside
+     * a way to the full list.
+     */
+    public static final String IN_ONE_LINE = "Screening estimate only, resting on stated assumptions: decisions"
+            + " belong with licensed professionals under local codes and permits.";
+
+    /** The heading a full list of the cautions carries. */
+    public static final String HEADING = "Cautions";
+
+    /** The full list as plain lines, each behind a prefix (say "# " in a CSV file): the heading, then one a line. */
+    public static List<String> lines(String prefix) {
+        java.util.ArrayList<String> out = new java.util.ArrayList<>();
+        out.add(prefix + HEADING + ":");
+        for (String c : ALL) {
+            out.add(prefix + "- " + c);
+        }
+        return List.copyOf(out);
+    }
+
     private Cautions() {
     }
 }

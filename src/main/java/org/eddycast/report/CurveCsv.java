@@ -3,11 +3,13 @@ package org.eddycast.report;
 import java.util.Locale;
 import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Cautions;
 
 /**
  * The mean-square-displacement curves of a result as CSV: time, then value and standard error per axis.
  * A file starts with a comment line {@code # eddycast <version>, seed <seed>} so the numbers can be traced
- * to the build and the random stream that made them.
+ * to the build and the random stream that made them, then the cautions as comment lines ({@code # ...}): a file
+ * that travels alone still carries them.
  */
 public final class CurveCsv {
 
@@ -19,9 +21,13 @@ public final class CurveCsv {
         return header(s.toolVersion(), s.scenario().simulation().seed()) + text(s.diffusivity());
     }
 
-    /** The comment line that opens every curve file. */
+    /** The comment lines that open every curve file: version and seed, then the cautions. */
     public static String header(String toolVersion, long seed) {
-        return String.format(Locale.ROOT, "# eddycast %s, seed %d\n", toolVersion, seed);
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "# eddycast %s, seed %d\n", toolVersion, seed));
+        for (String line : Cautions.lines("# ")) {
+            sb.append(line).append('\n');
+        }
+        return sb.toString();
     }
 
     /**

@@ -112,8 +112,12 @@ final class ResultsView extends JPanel {
         showEmpty();
     }
 
+    /** Adds a tab whose body stands over the one-line cautions footer that every results tab carries. */
     private void addTab(String title, int mnemonic, JComponent body, String tip) {
-        tabs.addTab(title, null, body, tip);
+        JPanel page = new JPanel(new BorderLayout());
+        page.add(body, BorderLayout.CENTER);
+        page.add(new CautionFooter(this::showCautions), BorderLayout.SOUTH);
+        tabs.addTab(title, null, page, tip);
         tabs.setMnemonicAt(tabs.getTabCount() - 1, mnemonic);
     }
 
@@ -163,6 +167,30 @@ final class ResultsView extends JPanel {
         if (stale != null) {
             styleStale();
         }
+    }
+
+    /** Brings the full list of cautions into view: the Inputs and cautions tab, scrolled to the list. */
+    void showCautions() {
+        tabs.setSelectedIndex(INPUTS_TAB);
+        reasoning.revalidate();
+        javax.swing.SwingUtilities.invokeLater(() -> {
+            int at = reasoning.getText().indexOf(Cautions.HEADING + "\n");
+            try {
+                java.awt.geom.Rectangle2D r = reasoning.modelToView2D(Math.max(0, at));
+                if (r != null) {
+                    java.awt.Rectangle view = r.getBounds();
+                    view.height = Math.max(view.height, reasoning.getVisibleRect().height);
+                    reasoning.scrollRectToVisible(view);
+                }
+            } catch (javax.swing.text.BadLocationException e) {
+                // the text changed meanwhile: the tab is shown, which is what matters
+            }
+        });
+    }
+
+    /** The cautions footer of a tab (for tests). */
+    CautionFooter footer(int tab) {
+        return (CautionFooter) ((JPanel) tabs.getComponentAt(tab)).getComponent(1);
     }
 
     OptionsView options() {
@@ -395,7 +423,7 @@ final class ResultsView extends JPanel {
             }
             sb.append('\n');
         }
-        sb.append("Cautions\n");
+        sb.append(Cautions.HEADING).append('\n');
         for (String c : cautions) {
             sb.append("\u2022 ").append(c).append('\n');
         }
