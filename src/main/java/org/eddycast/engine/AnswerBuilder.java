@@ -37,11 +37,17 @@ final class AnswerBuilder {
             notes.add("the scenario gives no release: 1 kg released at once was assumed; every concentration"
                     + " scales with the mass");
         }
+        if (s.substance().loss().present() && transport instanceof ChannelStageResult) {
+            notes.add("the substance is lost at first order with a half-life of "
+                    + f.time(s.substance().loss().halfLife()) + ": every station's concentrations and the dose plan"
+                    + " include the loss");
+        }
         List<Answers.StationAnswer> stations = new ArrayList<>();
         Answers.DosePlan plan = null;
         String headline;
         if (transport instanceof ChannelStageResult c) {
-            List<StationCurve> unit = c.stations();
+            // per kg released, with the substance's first-order loss: the dose plan then accounts for it
+            List<StationCurve> unit = FirstOrderDecay.apply(c.stations(), s.substance().loss());
             int asked = s.forecast().stations().size();
             for (int k = 0; k < asked; k++) {
                 stations.add(station(unit.get(k), release.mass(), stock, s.forecast().detectionLimit()));

@@ -113,7 +113,7 @@ final class ChannelForecast {
                 + "(straight channel)", handbookAcross, handbookAcross, handbookAcross, "m",
                 "cosine series across the width with eps_t = 0.15 h u* (Fischer et al. 1979)"));
         List<String> assumptions = new ArrayList<>(flow.assumptions());
-        assumptions.add("a passive, conservative tracer: it neither decays, settles nor changes the flow");
+        assumptions.add(FirstOrderDecay.CONSERVATIVE);
         assumptions.add("particles carried by the mean velocity over the section and spread by the local"
                 + " turbulent diffusivity (random-displacement model), reflected at the bed, the surface and the"
                 + " banks");

@@ -55,7 +55,8 @@ public final class ForecastBuilder {
 
     /** The forecast of a study with the transport stage's result (null when it had none). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
-        return StockCap.apply(uncapped(s, flow, r, transport), s.release());
+        Forecast conservative = uncapped(s, flow, r, transport);
+        return StockCap.apply(FirstOrderDecay.apply(conservative, s.substance().loss()), s.release());
     }
 
     private static Forecast uncapped(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
@@ -88,7 +89,7 @@ public final class ForecastBuilder {
         List<Comparison> handbook = new ArrayList<>();
         List<String> assumptions = new ArrayList<>(flow.assumptions());
         assumptions.add("homogeneous, stationary turbulence with the stated statistics throughout the region");
-        assumptions.add("a passive, conservative tracer: it neither decays, settles nor changes the flow");
+        assumptions.add(FirstOrderDecay.CONSERVATIVE);
         assumptions.add("spreading relative to the cloud's centre; the mean flow carries the centre");
         assumptions.add("no dispersion by mean-velocity shear (not in a homogeneous-turbulence model)");
         assumptions.add("a Gaussian cloud with the simulated variance; walls by the cosine series");

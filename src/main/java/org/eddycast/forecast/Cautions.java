@@ -9,8 +9,8 @@ public final class Cautions {
     public static final List<String> ALL = List.of(
             "This is a screening estimate for planning and comparison. It is not a design, permit or compliance"
                     + " calculation.",
-            "It rests on the assumptions stated with it (homogeneous turbulence, a passive tracer that neither"
-                    + " decays nor settles, and the rules listed for every value); real flows can mix faster or"
+            "It rests on the assumptions stated with it (homogeneous turbulence, a passive tracer that does not"
+                    + " settle and decays only as stated, and the rules listed for every value); real flows can mix faster or"
                     + " slower.",
             "Decisions that affect people or the environment belong with licensed professionals, following local"
                     + " codes and the conditions of any permit.",

@@ -429,7 +429,28 @@ public final class ScenarioReader {
     private static Substance readSubstance(FieldReader s) {
         String name = s.text("name", "", false);
         double d0 = s.number("molecularDiffusivity", "m^2/s", 0, 1.0, true, 1e-9, true);
-        return new Substance(name, d0);
+        return new Substance(name, d0, readLoss(s));
+    }
+
+    /** The most rapid first-order loss read: a half-life of a tenth of a second is already no tracer at all. */
+    static final double MAX_DECAY_RATE = 10.0;
+
+    /** substance.decayRate (1/s) or substance.halfLife (s), one of them or neither. */
+    private static FirstOrderLoss readLoss(FieldReader s) {
+        boolean rate = s.has("decayRate");
+        boolean half = s.has("halfLife");
+        double k = s.number("decayRate", "1/s", 0, MAX_DECAY_RATE, true, Double.NaN, false);
+        double h = s.number("halfLife", "s", Math.log(2) / MAX_DECAY_RATE, Double.POSITIVE_INFINITY, false,
+                Double.NaN, false);
+        if (rate && half) {
+            s.problem(s.name("decayRate") + " and " + s.name("halfLife") + " both give the first-order loss: keep one"
+                    + " of them (a rate k in 1/s, or a half-life ln 2 / k in s)");
+            return FirstOrderLoss.NONE;
+        }
+        if (!Double.isNaN(k)) {
+            return FirstOrderLoss.ofRate(k);
+        }
+        return Double.isNaN(h) ? FirstOrderLoss.NONE : FirstOrderLoss.ofHalfLife(h);
     }
 
     private static SimulationSettings readSimulation(FieldReader s, FlowSpec flow) {

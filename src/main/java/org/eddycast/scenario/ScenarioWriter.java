@@ -46,6 +46,14 @@ public final class ScenarioWriter {
             substance.put("name", s.substance().name());
         }
         substance.put("molecularDiffusivity", s.substance().molecularDiffusivity());
+        FirstOrderLoss loss = s.substance().loss();
+        if (loss.present()) {
+            if (loss.givenAsHalfLife()) {
+                substance.put("halfLife", loss.halfLife());
+            } else {
+                substance.put("decayRate", loss.rate());
+            }
+        }
         if (s.release().given()) {
             release(root.putObject("release"), s.release(), s.flow());
         }

@@ -76,6 +76,25 @@ public record StationCurve(double distance, double across, double[] times, doubl
         return new StationCurve(distance, across, times, c, l, h, binWidth, one);
     }
 
+    /**
+     * The same curve for a tracer lost at first order with rate {@code k} (1/s): each value times exp(-k t) at
+     * its record time t, the solution of dc/dt = -k c. Its peak is read again from the new values.
+     */
+    public StationCurve decayed(double k) {
+        double[] c = concentration.clone();
+        double[] l = low.clone();
+        double[] h = high.clone();
+        double[] one = oneParticle.clone();
+        for (int j = 0; j < c.length; j++) {
+            double f = Math.exp(-k * times[j]);
+            c[j] *= f;
+            l[j] *= f;
+            h[j] *= f;
+            one[j] *= f;
+        }
+        return new StationCurve(distance, across, times, c, l, h, binWidth, one);
+    }
+
     /** The same curve with every value held at most at {@code cap} (kg/m^3). */
     public StationCurve capped(double cap) {
         double[] c = concentration.clone();

@@ -52,6 +52,7 @@ public final class FormLayout {
             new Section("section.release", List.of(
                     FieldSpec.text("substance.name", null, true),
                     FieldSpec.number("substance.molecularDiffusivity", "m\u00b2/s", null, false),
+                    FieldSpec.number("substance.halfLife", "s", null, true),
                     FieldSpec.number("release.mass", "kg", null, true),
                     FieldSpec.number("release.rate", "kg/s", "channel", true),
                     FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")),
