@@ -55,8 +55,9 @@ public final class ForecastBuilder {
 
     /** The forecast of a study with the transport stage's result (null when it had none). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
-        Forecast conservative = uncapped(s, flow, r, transport);
-        return StockCap.apply(FirstOrderDecay.apply(conservative, s.substance().loss()), s.release());
+        Forecast slug = uncapped(s, flow, r, transport);
+        Forecast decayed = FirstOrderDecay.apply(slug, s.substance().loss());
+        return StockCap.apply(ReleaseOverDuration.apply(decayed, s.release()), s.release());
     }
 
     private static Forecast uncapped(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {

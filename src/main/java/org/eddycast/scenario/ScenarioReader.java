@@ -364,7 +364,8 @@ public final class ScenarioReader {
             p.rejectUnknown();
         }
         double volume = r.number("volume", "m^3", 0, 1e6, true, Double.NaN, false);
-        return new Release(mass, rate, position, where.equals("bank"), volume, true);
+        double duration = r.number("duration", "s", 0, 1e7, true, Double.NaN, false);
+        return new Release(mass, rate, position, where.equals("bank"), volume, true, duration);
     }
 
     private static ForecastSettings readForecast(FieldReader r) {

@@ -201,6 +201,7 @@ public final class ScenarioWriter {
         optional(n, "volume", r.volume());
         if (flow instanceof ChannelFlow) {
             optional(n, "rate", r.rate());
+            optional(n, "duration", r.duration());
             n.put("location", r.atBank() ? "bank" : "centre-line");
         }
         if (r.position() != null && flow instanceof TankFlow) {

@@ -54,6 +54,7 @@ public final class FormLayout {
                     FieldSpec.number("substance.molecularDiffusivity", "m\u00b2/s", null, false),
                     FieldSpec.number("substance.halfLife", "s", null, true),
                     FieldSpec.number("release.mass", "kg", null, true),
+                    FieldSpec.number("release.duration", "s", "channel", true),
                     FieldSpec.number("release.rate", "kg/s", "channel", true),
                     FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")),
                     FieldSpec.number("release.position.x", "m", "tank", true),

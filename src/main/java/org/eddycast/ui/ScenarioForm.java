@@ -390,7 +390,7 @@ public final class ScenarioForm extends JPanel {
         if (tree.get("release") instanceof ObjectNode release) {
             // the reader refuses a release field of another route: it goes with the route it belonged to
             if (!kind.equals("channel")) {
-                release.remove(List.of("location", "rate"));
+                release.remove(List.of("location", "rate", "duration"));
             }
             if (!kind.equals("tank")) {
                 release.remove("position");
