@@ -406,7 +406,8 @@ public final class ScenarioReader {
         if (u != null) {
             units = new DisplayUnits(u.choice("concentration", DisplayUnits.CONCENTRATIONS, "kg/m3", false),
                     u.choice("time", DisplayUnits.TIMES, "s", false),
-                    u.choice("distance", DisplayUnits.DISTANCES, "m", false));
+                    u.choice("distance", DisplayUnits.DISTANCES, "m", false),
+                    u.choice("speed", DisplayUnits.SPEEDS, "rev/s", false));
             u.rejectUnknown();
         }
         List<ProbePoint> probes = new java.util.ArrayList<>();

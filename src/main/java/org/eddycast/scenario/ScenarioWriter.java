@@ -192,6 +192,7 @@ public final class ScenarioWriter {
             u.put("concentration", f.units().concentration());
             u.put("time", f.units().time());
             u.put("distance", f.units().distance());
+            u.put("speed", f.units().speed());
         }
     }
 
