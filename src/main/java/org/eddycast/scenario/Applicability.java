@@ -49,10 +49,11 @@ final class Applicability {
         }
         JsonNode forecast = root.path("forecast");
         if (forecast.isObject() && !kind.isEmpty() && !kind.equals("channel")) {
-            for (String f : List.of("stations", "targetPeak", "cap")) {
+            for (String f : List.of("stations", "targetPeak", "cap", "horizonDistance")) {
                 if (forecast.has(f)) {
-                    problems.add("forecast." + f + " applies to a channel only (stations are distances downstream);"
-                            + " remove it");
+                    problems.add("forecast." + f + " applies to a channel only (" + (f.equals("horizonDistance")
+                            ? "a distance downstream; elsewhere give forecast.horizon in s"
+                            : "stations are distances downstream") + "); remove it");
                 }
             }
         }

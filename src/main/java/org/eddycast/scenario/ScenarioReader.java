@@ -422,7 +422,12 @@ public final class ScenarioReader {
                 item.rejectUnknown();
             }
         }
-        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units, probes);
+        double reach = r.number("horizonDistance", "m", 0, 1e7, true, Double.NaN, false);
+        if (!Double.isNaN(reach) && !Double.isNaN(horizon)) {
+            r.problem(r.name("horizon") + " and " + r.name("horizonDistance") + " both set the forecast's reach: keep"
+                    + " one of them (a time in s, or in a channel a distance downstream in m)");
+        }
+        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units, probes, reach);
     }
 
     /** The most stations one forecast reads (each keeps its own counts per block and record). */

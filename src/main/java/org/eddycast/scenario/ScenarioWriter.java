@@ -59,6 +59,7 @@ public final class ScenarioWriter {
         }
         ObjectNode forecast = root.putObject("forecast");
         optional(forecast, "horizon", s.forecast().horizon());
+        optional(forecast, "horizonDistance", s.forecast().horizonDistance());
         forecast.put("widthMeasure", s.forecast().widthMeasure());
         forecast.put("edgeFraction", s.forecast().edgeFraction());
         stations(forecast, s.forecast());

@@ -62,6 +62,7 @@ public final class FormLayout {
                     FieldSpec.number("release.position.z", "m", "tank", true))),
             new Section("section.forecast", List.of(
                     FieldSpec.number("forecast.horizon", "s", null, true),
+                    FieldSpec.number("forecast.horizonDistance", "m", "channel", true),
                     // the scenario file's default (full width at half maximum) first, so an empty form shows it
                     FieldSpec.choice("forecast.widthMeasure", null, List.of("fwhm", "standard-deviation",
                             "visible-edge")),

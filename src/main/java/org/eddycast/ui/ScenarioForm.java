@@ -396,6 +396,9 @@ public final class ScenarioForm extends JPanel {
                 release.remove("position");
             }
         }
+        if (!kind.equals("channel") && tree.get("forecast") instanceof ObjectNode forecast) {
+            forecast.remove("horizonDistance");
+        }
         for (FieldRow row : rows) {
             if (!row.visible()) {
                 continue;
