@@ -50,7 +50,9 @@ final class FirstOrderDecay {
         }
         List<String> assumptions = new ArrayList<>();
         for (String a : f.assumptions()) {
-            assumptions.add(a.equals(CONSERVATIVE) ? "a passive tracer: it neither settles nor changes the flow" : a);
+            // the rules' own lines say "conservative" too: with a loss the tracer is passive, not conservative
+            assumptions.add(a.equals(CONSERVATIVE) ? "a passive tracer: it neither settles nor changes the flow"
+                    : a.replace("passive, conservative tracer", "passive tracer"));
         }
         assumptions.add(assumption(loss));
         return new Forecast(f.inDistance(), f.grid(), times, f.measure(), f.edgeFraction(), f.width(),

@@ -24,6 +24,7 @@ import org.eddycast.report.ChartSpecs;
 import org.eddycast.report.Headline;
 import org.eddycast.report.SpreadCurves;
 import org.eddycast.report.SummaryContent;
+import org.eddycast.scenario.DisplayUnits;
 
 /**
  * The results side: the answer on top, then one row of tabs grouped by what a user looks for (the forecast
@@ -43,6 +44,7 @@ final class ResultsView extends JPanel {
 
     private static final String WIDTH = "Plume width";
     private static final String PEAK = "Peak concentration";
+    private static final String STATIONS = "Concentration at the stations";
     private static final String RUNNING = "Running estimate of the eddy diffusivity";
     private static final String SPREAD = "Spread of the particle cloud";
     private static final String SPECTRUM = "Velocity spectrum of the record";
@@ -51,7 +53,8 @@ final class ResultsView extends JPanel {
     private final JTabbedPane tabs = new JTabbedPane();
     private final ChartDeck curves = new ChartDeck("curves", entries(
             WIDTH, "The forecast plume width appears here when a run finishes.",
-            PEAK, "The forecast peak concentration appears here when a run finishes."));
+            PEAK, "The forecast peak concentration appears here when a run finishes.",
+            STATIONS, "In a channel with stations, the concentration against time at each appears here."));
     private final ChartDeck quality = new ChartDeck("quality", entries(
             RUNNING, "The running eddy diffusivity appears here while the simulation runs.",
             SPREAD, "The spread of the particle cloud appears here while the simulation runs.",
@@ -188,6 +191,11 @@ final class ResultsView extends JPanel {
         });
     }
 
+    /** Shows one chart of the Curves tab by its title (for tests and screenshots). */
+    void showChart(String title) {
+        curves.select(title);
+    }
+
     /** The cautions footer of a tab (for tests). */
     CautionFooter footer(int tab) {
         return (CautionFooter) ((JPanel) tabs.getComponentAt(tab)).getComponent(1);
@@ -275,6 +283,7 @@ final class ResultsView extends JPanel {
         headline.show(null, "No result yet: fill in the form and press Run (Ctrl+R).");
         curves.set(WIDTH, null, "The forecast plume width appears here when a run finishes.");
         curves.set(PEAK, null, "The forecast peak concentration appears here when a run finishes.");
+        curves.set(STATIONS, null, "In a channel with stations, the concentration against time at each appears here.");
         quality.set(RUNNING, null, "The running eddy diffusivity appears here while the simulation runs.");
         quality.set(SPREAD, null, "The spread of the particle cloud appears here while the simulation runs.");
         quality.set(SPECTRUM, null, null);
@@ -372,14 +381,22 @@ final class ResultsView extends JPanel {
         if (f == null) {
             curves.set(WIDTH, null, "This result carries no forecast.");
             curves.set(PEAK, null, "This result carries no forecast.");
+            curves.set(STATIONS, null, "This result carries no forecast.");
             forecastTable.show(SummaryContent.Table.EMPTY);
             handbookTable.show(SummaryContent.Table.EMPTY);
             mixing.setText("This result carries no forecast.");
             handbookNotes.setText("No handbook estimate applies without a forecast.");
             return;
         }
-        curves.set(WIDTH, ChartSpecs.width(f, "Plume width"), null);
-        curves.set(PEAK, ChartSpecs.peak(f), null);
+        DisplayUnits units = s.scenario().forecast().units();
+        curves.set(WIDTH, ChartSpecs.width(f, "Plume width", units), null);
+        curves.set(PEAK, ChartSpecs.peak(f, units), null);
+        if (s.answers() != null && !s.answers().stations().isEmpty()) {
+            curves.set(STATIONS, ChartSpecs.stations(s.answers()), null);
+        } else {
+            curves.set(STATIONS, null, "No stations: in a channel, list them under forecast.stations (distances "
+                    + "downstream) to see the concentration against time at each.");
+        }
         forecastTable.show(content.forecastTable());
         StringBuilder sb = new StringBuilder();
         for (SummaryContent.Row row : content.forecast()) {

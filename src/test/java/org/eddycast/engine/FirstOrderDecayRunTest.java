@@ -85,6 +85,8 @@ class FirstOrderDecayRunTest {
     void theLossHasItsOwnAssumptionLine() {
         assertTrue(plain.forecast().assumptions().contains(FirstOrderDecay.CONSERVATIVE));
         assertFalse(decayed.forecast().assumptions().contains(FirstOrderDecay.CONSERVATIVE));
+        assertTrue(decayed.forecast().assumptions().stream().noneMatch(l -> l.contains("conservative")),
+                decayed.forecast().assumptions()::toString);
         assertTrue(decayed.forecast().assumptions().stream().anyMatch(l -> l.startsWith("first-order loss at k = "
                 + ForecastBuilder.fmt(k()) + " 1/s (half-life 600 s)")), decayed.forecast().assumptions()::toString);
         assertTrue(decayed.answers().notes().stream().anyMatch(n -> n.contains("half-life")));
