@@ -2,20 +2,31 @@ package org.eddycast.ui;
 
 import java.awt.Font;
 import java.awt.Graphics2D;
+import java.awt.RenderingHints;
 import java.awt.event.KeyEvent;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.awt.print.PrinterException;
 import java.awt.print.PrinterJob;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.function.Supplier;
+import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
+import javax.imageio.ImageTypeSpecifier;
+import javax.imageio.ImageWriteParam;
+import javax.imageio.ImageWriter;
+import javax.imageio.metadata.IIOMetadata;
+import javax.imageio.metadata.IIOMetadataNode;
+import javax.imageio.stream.ImageOutputStream;
 import javax.swing.Action;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Cautions;
 import org.eddycast.plugin.HostContext;
+import org.eddycast.sheet.CautionBlock;
 import org.eddycast.sheet.ChartRendering;
 import org.eddycast.report.ChartSpec;
 import org.eddycast.report.CurveCsv;
@@ -24,8 +35,15 @@ import org.eddycast.sheet.SummarySheetPrintable;
 import org.eddycast.scenario.AtomicFiles;
 import org.jfree.svg.SVGGraphics2D;
 
-/** The panel's outputs: the summary sheet (PDF, print), the charts (PNG, SVG) and the curves (CSV). */
+/**
+ * The panel's outputs: the summary sheet (PDF, print), the charts (PNG, SVG) and the curves (CSV). Every one
+ * carries the cautions: the sheet and the CSV in their text, the pictures in a block drawn under the charts.
+ */
 final class Exports {
+
+    private static final int WIDTH = 900;
+    private static final int CHART_HEIGHT = 420;
+    private static final Font FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
 
     private final HostContext host;
     private final Dialogs dialogs;
@@ -116,35 +134,70 @@ final class Exports {
                         .ifPresent(p -> guarded(p, () -> AtomicFiles.writeString(p, CurveCsv.text(r)))))));
     }
 
-    /** The charts stacked in one PNG, 900 by 420 pixels each. */
+    /** The charts stacked in one PNG, 900 by 420 pixels each, the cautions under them. */
     static void writePng(List<ChartSpec> charts, Path target) throws IOException {
-        int w = 900;
-        int h = 420;
-        BufferedImage img = new BufferedImage(w, h * Math.max(1, charts.size()), BufferedImage.TYPE_INT_RGB);
+        byte[] png = png(charts);
+        AtomicFiles.write(target, out -> out.write(png));
+    }
+
+    /** The charts stacked in one SVG document, the cautions under them. */
+    static void writeSvg(List<ChartSpec> charts, Path target) throws IOException {
+        AtomicFiles.writeString(target, svg(charts));
+    }
+
+    /**
+     * The PNG's bytes: the charts, the cautions drawn under them, and the cautions again as the PNG's standard
+     * "Disclaimer" text (PNG specification, ISO/IEC 15948, keyword list) so a program reading the file finds them.
+     */
+    static byte[] png(List<ChartSpec> charts) throws IOException {
+        int h = CHART_HEIGHT * Math.max(1, charts.size());
+        CautionBlock cautions = new CautionBlock(FONT, WIDTH);
+        BufferedImage img = new BufferedImage(WIDTH, h + cautions.height(), BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
-            draw(charts, g, w, h);
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            draw(charts, g);
+            cautions.draw(g, h);
         } finally {
             g.dispose();
         }
-        AtomicFiles.write(target, out -> ImageIO.write(img, "png", out));
+        ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try (ImageOutputStream out = ImageIO.createImageOutputStream(bytes)) {
+            writer.setOutput(out);
+            ImageWriteParam param = writer.getDefaultWriteParam();
+            IIOMetadata meta = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(img), param);
+            IIOMetadataNode entry = new IIOMetadataNode("tEXtEntry");
+            entry.setAttribute("keyword", "Disclaimer");
+            entry.setAttribute("value", String.join("\n", Cautions.lines("")));
+            IIOMetadataNode text = new IIOMetadataNode("tEXt");
+            text.appendChild(entry);
+            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
+            root.appendChild(text);
+            meta.mergeTree("javax_imageio_png_1.0", root);
+            writer.write(null, new IIOImage(img, null, meta), param);
+        } finally {
+            writer.dispose();
+        }
+        return bytes.toByteArray();
     }
 
-    /** The charts stacked in one SVG document. */
-    static void writeSvg(List<ChartSpec> charts, Path target) throws IOException {
-        int w = 900;
-        int h = 420;
-        SVGGraphics2D g = new SVGGraphics2D(w, h * Math.max(1, charts.size()));
-        draw(charts, g, w, h);
-        AtomicFiles.writeString(target, g.getSVGDocument());
+    /** The SVG document: the charts, then the cautions as text under them. */
+    static String svg(List<ChartSpec> charts) {
+        int h = CHART_HEIGHT * Math.max(1, charts.size());
+        CautionBlock cautions = new CautionBlock(FONT, WIDTH);
+        SVGGraphics2D g = new SVGGraphics2D(WIDTH, h + cautions.height());
+        draw(charts, g);
+        cautions.draw(g, h);
+        return g.getSVGDocument();
     }
 
-    private static void draw(List<ChartSpec> charts, Graphics2D g, int w, int h) {
+    private static void draw(List<ChartSpec> charts, Graphics2D g) {
         g.setColor(java.awt.Color.WHITE);
-        g.fillRect(0, 0, w, h * Math.max(1, charts.size()));
-        Font font = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
+        g.fillRect(0, 0, WIDTH, CHART_HEIGHT * Math.max(1, charts.size()));
         for (int i = 0; i < charts.size(); i++) {
-            ChartRendering.draw(charts.get(i), ChartRendering.PAPER, font, g, new Rectangle2D.Double(0, i * h, w, h));
+            ChartRendering.draw(charts.get(i), ChartRendering.PAPER, FONT, g,
+                    new Rectangle2D.Double(0, i * CHART_HEIGHT, WIDTH, CHART_HEIGHT));
         }
     }
 
