@@ -39,7 +39,10 @@ class StationChartTest {
             holder[0] = new EddycastPanel(new PanelRunTest.TestHost(), new PanelRunTest.TestDialogs(),
                     new UiPreferences(prefs));
             holder[0].setThreads(2);
-            holder[0].showScenario(ScenarioReader.parse(text), Path.of("presets"), "lowland.json");
+            // the preset's input ranges would add a sweep: this test is about the one run's chart
+            holder[0].showScenario(ScenarioReader.parse(text)
+                    .withUncertainty(org.eddycast.scenario.UncertaintySettings.none()), Path.of("presets"),
+                    "lowland.json");
             holder[0].runAction().actionPerformed(null);
         });
         EddycastPanel panel = holder[0];
