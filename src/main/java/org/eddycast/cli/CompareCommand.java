@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.eddycast.engine.Engine;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Cautions;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.report.OptionComparison;
 import org.eddycast.report.ResultJson;
@@ -92,6 +93,8 @@ final class CompareCommand implements Callable<Integer> {
         List<String> names = results.stream().map(r -> r.scenario().name()).toList();
         List<String> verdict = List.of(OptionComparison.of(names, results).verdict());
         verdict.forEach(out::println);
+        out.println();
+        Cautions.lines("").forEach(out::println);
         Saves saves = new Saves(out);
         saves.save("comparison", json, () -> {
             ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

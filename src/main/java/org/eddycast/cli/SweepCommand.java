@@ -143,8 +143,7 @@ final class SweepCommand implements Callable<Integer> {
         }
         Scenario scenario = ScenarioReader.parse(parts.get(0).scenario());
         SweepPlan plan = new SweepPlan(scenario);
-        double[][] responses = SweepSummary.merge(plan, parts);
-        UncertaintySummary u = SweepSummary.summarise(plan, responses, null);
+        UncertaintySummary u = SweepSummary.summarise(plan, SweepSummary.merge(plan, parts), null);
         ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode root = mapper.createObjectNode();
         root.put("tool", "eddycast");

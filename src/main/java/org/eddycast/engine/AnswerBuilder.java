@@ -29,7 +29,11 @@ final class AnswerBuilder {
         double stock = release.stockConcentration();
         Answers.ReleaseFacts facts = new Answers.ReleaseFacts(release.mass(), release.volume(),
                 Double.isFinite(stock) ? stock : Double.NaN, release.mode(),
-                release.mode().equals("slug") ? 0 : Double.NaN, !release.given());
+                switch (release.mode()) {
+                    case Release.SLUG -> 0;
+                    case Release.OVER_DURATION -> release.duration();
+                    default -> Double.NaN;
+                }, !release.given());
         DisplayFormat f = new DisplayFormat(s.forecast().units());
         List<String> notes = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
@@ -37,11 +41,24 @@ final class AnswerBuilder {
             notes.add("the scenario gives no release: 1 kg released at once was assumed; every concentration"
                     + " scales with the mass");
         }
+        if (s.substance().loss().present() && transport instanceof ChannelStageResult) {
+            notes.add("the substance is lost at first order with a half-life of "
+                    + f.time(s.substance().loss().halfLife()) + ": every station's concentrations and the dose plan"
+                    + " include the loss");
+        }
         List<Answers.StationAnswer> stations = new ArrayList<>();
         Answers.DosePlan plan = null;
         String headline;
         if (transport instanceof ChannelStageResult c) {
-            List<StationCurve> unit = c.stations();
+            // per kg released, with the substance's first-order loss (each parcel decays from the moment it goes
+            // in, so before the window over the release's duration): the dose plan then accounts for both
+            List<StationCurve> unit = ReleaseOverDuration.curves(
+                    FirstOrderDecay.apply(c.stations(), s.substance().loss()), release);
+            if (release.mode().equals(Release.OVER_DURATION)) {
+                notes.add("the release goes in over " + f.time(release.duration()) + " at "
+                        + DisplayFormat.round(release.mass() / release.duration()) + " kg/s: each station's curve is"
+                        + " the slug's averaged over a sliding window of that length");
+            }
             int asked = s.forecast().stations().size();
             for (int k = 0; k < asked; k++) {
                 stations.add(station(unit.get(k), release.mass(), stock, s.forecast().detectionLimit()));

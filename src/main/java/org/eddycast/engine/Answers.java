@@ -33,8 +33,10 @@ public record Answers(String headline, ReleaseFacts release, List<StationAnswer>
      * @param mass               released mass (kg)
      * @param volume             volume of the injected solution (m^3), NaN when not given
      * @param stockConcentration mass over volume (kg/m^3), NaN when no volume was given
-     * @param mode               "slug" (instantaneous) or "continuous"
-     * @param duration           duration of the release (s): 0 for a slug, NaN for a continuous release
+     * @param mode               "slug" (instantaneous), "over-duration" (a constant rate over a stated time) or
+     *                           "continuous"
+     * @param duration           duration of the release (s): 0 for a slug, the stated time for "over-duration", NaN
+     *                           for a continuous release
      * @param assumed            true when the scenario gave no release and 1 kg was assumed
      */
     public record ReleaseFacts(double mass, double volume, double stockConcentration, String mode, double duration,

@@ -41,11 +41,18 @@ final class ChannelForecast {
         double horizon = s.forecast().horizon();
         Estimate across = t.distanceToMixedWidth();
         Estimate depth = t.distanceToMixedDepth();
+        if (Double.isNaN(horizon) && !Double.isNaN(s.forecast().horizonDistance())) {
+            horizon = s.forecast().horizonDistance() / u;
+        }
         if (Double.isNaN(horizon)) {
             horizon = across.determined() ? Math.max(1.5 * across.value() / u, end) : end;
         }
+        // the grid starts at the first record (no point nearer the release than the run resolved), runs out to
+        // the furthest station and the horizon, and puts every station on a grid point
+        double[] marks = ForecastBuilder.channelMarks(s.forecast(), u);
         double first = recordTimes[0];
-        double[] times = ForecastBuilder.grid(first, Math.max(horizon, 10 * first));
+        horizon = Math.max(horizon, ForecastBuilder.furthest(marks));
+        double[] times = ForecastBuilder.grid(first, Math.max(horizon, 10 * first), marks);
         double[][] variance = t.variance();
         Estimate kl = t.longitudinalDispersion();
         double n = t.particles();
@@ -113,7 +120,7 @@ final class ChannelForecast {
                 + "(straight channel)", handbookAcross, handbookAcross, handbookAcross, "m",
                 "cosine series across the width with eps_t = 0.15 h u* (Fischer et al. 1979)"));
         List<String> assumptions = new ArrayList<>(flow.assumptions());
-        assumptions.add("a passive, conservative tracer: it neither decays, settles nor changes the flow");
+        assumptions.add(FirstOrderDecay.CONSERVATIVE);
         assumptions.add("particles carried by the mean velocity over the section and spread by the local"
                 + " turbulent diffusivity (random-displacement model), reflected at the bed, the surface and the"
                 + " banks");

@@ -55,7 +55,9 @@ public final class ForecastBuilder {
 
     /** The forecast of a study with the transport stage's result (null when it had none). */
     public static Forecast build(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
-        return StockCap.apply(uncapped(s, flow, r, transport), s.release());
+        Forecast slug = uncapped(s, flow, r, transport);
+        Forecast decayed = FirstOrderDecay.apply(slug, s.substance().loss());
+        return StockCap.apply(ReleaseOverDuration.apply(decayed, s.release()), s.release());
     }
 
     private static Forecast uncapped(Scenario s, ResolvedFlow flow, DiffusivityResult r, TransportResult transport) {
@@ -88,13 +90,14 @@ public final class ForecastBuilder {
         List<Comparison> handbook = new ArrayList<>();
         List<String> assumptions = new ArrayList<>(flow.assumptions());
         assumptions.add("homogeneous, stationary turbulence with the stated statistics throughout the region");
-        assumptions.add("a passive, conservative tracer: it neither decays, settles nor changes the flow");
+        assumptions.add(FirstOrderDecay.CONSERVATIVE);
         assumptions.add("spreading relative to the cloud's centre; the mean flow carries the centre");
         assumptions.add("no dispersion by mean-velocity shear (not in a homogeneous-turbulence model)");
         assumptions.add("a Gaussian cloud with the simulated variance; walls by the cosine series");
         ForecastSettings settings = s.forecast();
         WidthMeasure measure = measure(settings.widthMeasure());
         double horizon = settings.horizon();
+        double[] marks = new double[0];
         boolean inDistance = false;
         double meanVelocity = flow.turbulence() == null ? 0 : flow.turbulence().meanVelocity();
         AxisDensityFactory density;
@@ -173,9 +176,13 @@ public final class ForecastBuilder {
             double[] at = {0, y0, ch.depth()};
             density = (axis, dEff) -> axis == 0 ? new FreeAxis(0, dEff)
                     : new TwoWallAxis(lower[axis], upper[axis], at[axis], dEff);
+            marks = channelMarks(settings, u);
             if (Double.isNaN(horizon)) {
-                horizon = 1.2 * Math.max(across, overDepth) / u;
+                horizon = Double.isNaN(settings.horizonDistance()) ? 1.2 * Math.max(across, overDepth) / u
+                        : settings.horizonDistance() / u;
             }
+            // the grid runs out to the furthest station
+            horizon = Math.max(horizon, furthest(marks));
             meanVelocity = u;
             if (!Double.isNaN(release.rate())) {
                 plume = new ChannelPlume(release.rate(), u, ch.depth(), ch.width(), d[1], d[2], fromBank,
@@ -205,7 +212,7 @@ public final class ForecastBuilder {
             }
         }
         horizon = Math.max(horizon, r.times()[0] * 10);
-        double[] times = grid(r.times()[0], horizon);
+        double[] times = grid(r.times()[0], horizon, marks);
         double[][] variance = new double[3][];
         double[][] varianceLow = new double[3][];
         double[][] varianceHigh = new double[3][];
@@ -267,6 +274,52 @@ public final class ForecastBuilder {
 
     static double shearVelocity(ChannelDesign ch) {
         return ChannelRules.shearVelocity(ch).value();
+    }
+
+    /**
+     * Geometric grid from the first record time to the horizon, with each mark (a station's travel time) inside
+     * that range put on the grid exactly: it replaces the grid point nearest to it, so the grid keeps its size and
+     * its order (a mark lies between the neighbours of its nearest point).
+     */
+    static double[] grid(double first, double horizon, double[] marks) {
+        double[] t = grid(first, horizon);
+        for (double m : marks) {
+            if (!(m > first && m < horizon)) {
+                continue;
+            }
+            int nearest = 1;
+            for (int j = 2; j < t.length - 1; j++) {
+                if (Math.abs(Math.log(t[j] / m)) < Math.abs(Math.log(t[nearest] / m))) {
+                    nearest = j;
+                }
+            }
+            if (m > t[nearest - 1] && m < t[nearest + 1]) {
+                t[nearest] = m;
+            }
+        }
+        return t;
+    }
+
+    /**
+     * The travel times x / U of a channel's stations and of its horizon distance: the grid runs out to the
+     * furthest and puts each on a grid point.
+     */
+    static double[] channelMarks(ForecastSettings f, double u) {
+        double[] marks = new double[f.stations().size() + 1];
+        for (int k = 0; k < f.stations().size(); k++) {
+            marks[k] = f.stations().get(k).distance() / u;
+        }
+        marks[marks.length - 1] = Double.isNaN(f.horizonDistance()) ? 0 : f.horizonDistance() / u;
+        return marks;
+    }
+
+    /** The furthest of the marks (0 for none). */
+    static double furthest(double[] marks) {
+        double far = 0;
+        for (double m : marks) {
+            far = Math.max(far, m);
+        }
+        return far;
     }
 
     /** Geometric grid from the first record time to the horizon. */

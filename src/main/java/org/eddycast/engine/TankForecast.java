@@ -97,7 +97,7 @@ final class TankForecast {
                     finite(p95.high(), p95.value()), grenville));
         }
         List<String> assumptions = new ArrayList<>(flow.assumptions());
-        assumptions.add("a passive, conservative tracer: it neither decays, settles nor changes the flow");
+        assumptions.add(FirstOrderDecay.CONSERVATIVE);
         assumptions.add(String.format(Locale.ROOT, "mean flow: %s circulation from a stream function carrying the"
                 + " impeller discharge N_Q N D^3 = %.3g m^3/s through the impeller; each loop carries %.3g m^3/s"
                 + " (the rest is entrained flow)", TankFlowRules.radialFlow(tank) ? "two-loop (radial impeller)"

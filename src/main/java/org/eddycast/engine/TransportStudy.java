@@ -111,8 +111,10 @@ final class TransportStudy {
             ChannelProfiles profiles = new ChannelProfiles(TankRules.STANDARD.dissipationConstant(), f[0]);
             double shear = ChannelRules.shearVelocity(ch).value();
             double[][] stations = stations(s);
-            double minDuration = Math.max(Double.isNaN(s.forecast().horizon()) ? 0 : s.forecast().horizon(),
-                    passageTime(ch, shear, stations[0]));
+            double horizon = !Double.isNaN(s.forecast().horizon()) ? s.forecast().horizon()
+                    : Double.isNaN(s.forecast().horizonDistance()) ? 0
+                    : s.forecast().horizonDistance() / ch.meanVelocity();
+            double minDuration = Math.max(horizon, passageTime(ch, shear, stations[0]));
             ChannelStage.Request q = new ChannelStage.Request(ch.section(), ch.meanVelocity(), shear, profiles, f[1],
                     s.substance().molecularDiffusivity(), s.release().atBank(), minDuration, channelParticles(s),
                     s.simulation().seed(), stations[0], stations[1]);

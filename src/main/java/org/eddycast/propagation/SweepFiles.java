@@ -46,9 +46,18 @@ public final class SweepFiles {
         part.figures().forEach(root.putArray("figures")::add);
         root.put("rows", part.rows());
         root.put("from", part.from());
-        ArrayNode responses = root.putArray("responses");
-        for (double[] row : part.responses()) {
-            ArrayNode values = responses.addArray();
+        rows(root.putArray("responses"), part.responses());
+        rows(root.putArray("halfWidths"), part.halfWidths());
+        try {
+            return MAPPER.writeValueAsString(root);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static void rows(ArrayNode list, double[][] rows) {
+        for (double[] row : rows) {
+            ArrayNode values = list.addArray();
             for (double v : row) {
                 if (Double.isFinite(v)) {
                     values.add(v);
@@ -56,11 +65,6 @@ public final class SweepFiles {
                     values.addNull();
                 }
             }
-        }
-        try {
-            return MAPPER.writeValueAsString(root);
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
         }
     }
 
@@ -92,24 +96,10 @@ public final class SweepFiles {
         }
         List<String> inputs = strings(root.path("inputs"));
         List<String> figures = strings(root.path("figures"));
-        JsonNode rows = root.path("responses");
-        if (!rows.isArray()) {
-            throw new IllegalArgumentException("responses must be a list of rows");
-        }
-        double[][] responses = new double[rows.size()][];
-        for (int i = 0; i < rows.size(); i++) {
-            JsonNode row = rows.get(i);
-            if (!row.isArray() || row.size() != figures.size()) {
-                throw new IllegalArgumentException("responses[" + i + "] must hold " + figures.size() + " values");
-            }
-            responses[i] = new double[figures.size()];
-            for (int f = 0; f < figures.size(); f++) {
-                JsonNode v = row.get(f);
-                if (!v.isNull() && !v.isNumber()) {
-                    throw new IllegalArgumentException("responses[" + i + "][" + f + "] must be a number or null");
-                }
-                responses[i][f] = v.isNull() ? Double.NaN : v.asDouble();
-            }
+        double[][] responses = rows(root, "responses", figures.size());
+        double[][] halfWidths = rows(root, "halfWidths", figures.size());
+        if (halfWidths.length != responses.length) {
+            throw new IllegalArgumentException("halfWidths must hold as many rows as responses");
         }
         int total = root.path("rows").asInt(-1);
         int from = root.path("from").asInt(-1);
@@ -122,7 +112,30 @@ public final class SweepFiles {
         }
         return new SweepPart(root.path("fingerprint").asText(""), root.path("scenario").toString(),
                 root.path("baseSamples").asInt(), inputs, figures,
-                total, from, responses);
+                total, from, responses, halfWidths);
+    }
+
+    private static double[][] rows(JsonNode root, String field, int width) {
+        JsonNode rows = root.path(field);
+        if (!rows.isArray()) {
+            throw new IllegalArgumentException(field + " must be a list of rows");
+        }
+        double[][] out = new double[rows.size()][];
+        for (int i = 0; i < rows.size(); i++) {
+            JsonNode row = rows.get(i);
+            if (!row.isArray() || row.size() != width) {
+                throw new IllegalArgumentException(field + "[" + i + "] must hold " + width + " values");
+            }
+            out[i] = new double[width];
+            for (int f = 0; f < width; f++) {
+                JsonNode v = row.get(f);
+                if (!v.isNull() && !v.isNumber()) {
+                    throw new IllegalArgumentException(field + "[" + i + "][" + f + "] must be a number or null");
+                }
+                out[i][f] = v.isNull() ? Double.NaN : v.asDouble();
+            }
+        }
+        return out;
     }
 
     private static List<String> strings(JsonNode list) {

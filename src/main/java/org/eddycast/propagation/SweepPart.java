@@ -14,9 +14,10 @@ import java.util.List;
  * @param from        the first row this part holds
  * @param responses   one array of figure values per row held ({@code responses.length} rows from {@code from});
  *                    NaN where a run did not determine a figure
+ * @param halfWidths  the 95% Monte Carlo half-width of each of those values, NaN where a figure has none
  */
 public record SweepPart(String fingerprint, String scenario, int baseSamples, List<String> inputs, List<String> figures, int rows,
-                        int from, double[][] responses) {
+                        int from, double[][] responses, double[][] halfWidths) {
 
     public SweepPart {
         inputs = List.copyOf(inputs);
@@ -26,6 +27,15 @@ public record SweepPart(String fingerprint, String scenario, int baseSamples, Li
             copy[i] = responses[i].clone();
         }
         responses = copy;
+        double[][] widths = new double[halfWidths.length][];
+        for (int i = 0; i < halfWidths.length; i++) {
+            widths[i] = halfWidths[i].clone();
+        }
+        halfWidths = widths;
+        if (halfWidths.length != responses.length) {
+            throw new IllegalArgumentException(responses.length + " rows of responses but " + halfWidths.length
+                    + " of half-widths");
+        }
     }
 
     /** One past the last row held. */

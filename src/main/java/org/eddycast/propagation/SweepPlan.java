@@ -171,6 +171,7 @@ public final class SweepPlan {
         prepare();
         SharedFieldStage field = new SharedFieldStage(cases, from, to);
         double[][] responses = new double[to - from][];
+        double[][] halfWidths = new double[to - from][];
         for (int row = from; row < to; row++) {
             if (cancel.isCancelled()) {
                 throw new RunCancelledException();
@@ -181,14 +182,18 @@ public final class SweepPlan {
                     (fraction, partial) -> progress.accept((done + fraction) / count), cancel, true,
                     field.forRow(row));
             double[] values = new double[figures.size()];
+            double[] widths = new double[figures.size()];
             for (int f = 0; f < values.length; f++) {
-                values[f] = figures.get(f).of(r)[0];
+                double[] figure = figures.get(f).of(r);
+                values[f] = figure[0];
+                widths[f] = (figure[2] - figure[1]) / 2;
             }
             responses[row - from] = values;
+            halfWidths[row - from] = widths;
         }
         progress.accept(1.0);
         return new SweepPart(fingerprint, ScenarioWriter.text(scenario), design.baseSamples(), inputs(), figureKeys(),
-                rows(), from, responses);
+                rows(), from, responses, halfWidths);
     }
 
     /**

@@ -33,9 +33,10 @@ public final class SweepSummary {
      *
      * @throws IllegalArgumentException naming what does not fit
      */
-    public static double[][] merge(SweepPlan plan, List<SweepPart> parts) {
+    public static Merged merge(SweepPlan plan, List<SweepPart> parts) {
         int rows = plan.rows();
         double[][] responses = new double[rows][];
+        double[][] halfWidths = new double[rows][];
         for (SweepPart p : parts) {
             if (!p.fingerprint().equals(plan.fingerprint())) {
                 throw new IllegalArgumentException("a part (rows " + p.from() + " to " + (p.to() - 1)
@@ -48,6 +49,7 @@ public final class SweepSummary {
                     throw new IllegalArgumentException("row " + row + " is in two parts: give each shard once");
                 }
                 responses[row] = p.responses()[i];
+                halfWidths[row] = p.halfWidths()[i];
             }
         }
         List<String> missing = new ArrayList<>();
@@ -60,16 +62,26 @@ public final class SweepSummary {
             throw new IllegalArgumentException("rows " + String.join(", ", missing) + (missing.size() == 5 ? ", ..." : "")
                     + " of " + rows + " are in no part: run the missing shards");
         }
-        return responses;
+        return new Merged(responses, halfWidths);
+    }
+
+    /**
+     * A whole sweep's rows, in row order.
+     *
+     * @param responses  every row's figures
+     * @param halfWidths their 95% Monte Carlo half-widths
+     */
+    public record Merged(double[][] responses, double[][] halfWidths) {
     }
 
     /**
      * The summary of a whole sweep.
      *
-     * @param responses every row's figures, in row order
+     * @param merged    every row's figures and their half-widths, in row order
      * @param nominal   the scenario's own run (its value and Monte Carlo interval sit beside the ranges), or null
      */
-    public static UncertaintySummary summarise(SweepPlan plan, double[][] responses, StudyResult nominal) {
+    public static UncertaintySummary summarise(SweepPlan plan, Merged merged, StudyResult nominal) {
+        double[][] responses = merged.responses();
         int n = plan.design().baseSamples();
         List<HeadlineFigure> figures = plan.figures();
         double[] centre = responses[plan.centreRow()];
@@ -92,9 +104,15 @@ public final class SweepSummary {
                         + "range is over the others", figure.label(), 2 * n - sample.length, 2 * n));
             }
             SampleSummary s = sample.length == 0 ? null : SampleSummary.of(sample);
+            double noise = noiseShare(sample, merged.halfWidths(), 2 * n, f, scale);
+            if (noise > NOISY) {
+                notes.add(String.format(Locale.ROOT, "about %.0f%% of the variance of the %s over the inputs is the "
+                        + "sampled runs' own particle noise: raise uncertainty.particles to separate the inputs' "
+                        + "effect from it", 100 * noise, figure.label()));
+            }
             ranges.add(new FigureRange(figure.key(), figure.label(), figure.unit(), own[0], own[1], own[2],
                     s == null ? Double.NaN : s.mean(), s == null ? Double.NaN : s.p05(),
-                    s == null ? Double.NaN : s.p50(), s == null ? Double.NaN : s.p95()));
+                    s == null ? Double.NaN : s.p50(), s == null ? Double.NaN : s.p95(), noise));
         }
         List<SensitivityIndex> indices = new ArrayList<>();
         String advice = "";
@@ -130,6 +148,31 @@ public final class SweepSummary {
                 + "Jansen (1999), 95%% half-widths by bootstrap over the base samples; with N = %d they rank the "
                 + "inputs coarsely (a larger sweep narrows them)", n));
         return new UncertaintySummary(rangedInputs(plan), n, plan.rows(), particles, ranges, indices, advice, notes);
+    }
+
+    /** The noise share above which a figure's range is said to be more the runs' noise than the inputs'. */
+    static final double NOISY = 0.25;
+
+    /**
+     * The share of the sample's variance that the runs' own Monte Carlo noise explains: the mean of the rows'
+     * squared standard errors (95% half-width over 1.96) over the sample variance, at most 1; NaN when the figure
+     * has no interval.
+     */
+    static double noiseShare(double[] sample, double[][] halfWidths, int rows, int f, double scale) {
+        double sum = 0;
+        int count = 0;
+        for (int row = 0; row < rows; row++) {
+            double h = halfWidths[row][f] * scale / 1.96;
+            if (Double.isFinite(h)) {
+                sum += h * h;
+                count++;
+            }
+        }
+        if (count == 0 || sample.length < 2) {
+            return Double.NaN;
+        }
+        double variance = new org.apache.commons.math3.stat.descriptive.moment.Variance().evaluate(sample);
+        return variance > 0 ? Math.min(1, sum / count / variance) : 1;
     }
 
     /**

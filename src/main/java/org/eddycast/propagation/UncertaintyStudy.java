@@ -35,8 +35,7 @@ public final class UncertaintyStudy {
                 (fraction, partial) -> listener.progress(share * fraction, partial), cancel);
         SweepPart all = plan.run(0, plan.rows(), threads,
                 fraction -> listener.progress(share + (1 - share) * fraction, null), cancel);
-        double[][] responses = SweepSummary.merge(plan, List.of(all));
-        return nominal.withUncertainty(SweepSummary.summarise(plan, responses, nominal));
+        return nominal.withUncertainty(SweepSummary.summarise(plan, SweepSummary.merge(plan, List.of(all)), nominal));
     }
 
     /** The scenario's own run's share of the work, by particles followed. */

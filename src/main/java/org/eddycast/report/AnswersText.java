@@ -14,7 +14,11 @@ final class AnswersText {
         DisplayFormat f = new DisplayFormat(a.units());
         Answers.ReleaseFacts r = a.release();
         sb.append("  release: ").append(DisplayFormat.round(r.mass())).append(" kg, ")
-                .append(r.mode().equals("slug") ? "at once (a slug)" : "continuous");
+                .append(switch (r.mode()) {
+                    case "slug" -> "at once (a slug)";
+                    case "over-duration" -> "at a constant rate over " + f.time(r.duration());
+                    default -> "continuous";
+                });
         if (Double.isFinite(r.volume())) {
             sb.append(", in ").append(DisplayFormat.round(r.volume())).append(" m^3 of solution (")
                     .append(f.concentration(r.stockConcentration())).append(", the cap on every concentration)");

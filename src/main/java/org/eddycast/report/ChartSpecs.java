@@ -2,6 +2,9 @@ package org.eddycast.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+import org.eddycast.engine.Answers;
+import org.eddycast.engine.DisplayFormat;
 import org.eddycast.forecast.Comparison;
 import org.eddycast.forecast.Forecast;
 import org.eddycast.forecast.WidthMeasure;
@@ -9,7 +12,9 @@ import org.eddycast.measure.Autocorrelation;
 import org.eddycast.measure.InertialRangeFit;
 import org.eddycast.measure.LogBinnedSpectrum;
 import org.eddycast.measure.RecordAnalysis;
+import org.eddycast.scenario.DisplayUnits;
 import org.eddycast.stats.AxisEstimate;
+import org.eddycast.transport.StationCurve;
 
 /** Builds the chart specs the panel and the summary sheet show. Pure data; no drawing. */
 public final class ChartSpecs {
@@ -110,7 +115,110 @@ public final class ChartSpecs {
 
     /** The horizontal axis label of a forecast chart, with its unit. */
     public static String gridLabel(Forecast f) {
-        return f.inDistance() ? "distance downstream (m)" : "time after release (s)";
+        return gridLabel(f, DisplayUnits.si());
+    }
+
+    /** The horizontal axis label of a forecast chart in the display units. */
+    public static String gridLabel(Forecast f, DisplayUnits u) {
+        return f.inDistance() ? "distance downstream (" + u.distance() + ")" : "time after release (" + u.time() + ")";
+    }
+
+    /** The plume width chart with its grid in the display units (widths stay in metres). */
+    public static ChartSpec width(Forecast f, String title, DisplayUnits u) {
+        return converted(width(f, title), gridUnit(f, u), gridLabel(f, u), v -> v, null);
+    }
+
+    /** The peak concentration chart in the display units. */
+    public static ChartSpec peak(Forecast f, DisplayUnits u) {
+        return converted(peak(f), gridUnit(f, u), gridLabel(f, u), u::concentration,
+                "peak concentration (" + SummaryContent.concentrationLabel(u) + ")");
+    }
+
+    private static DoubleUnaryOperator gridUnit(Forecast f, DisplayUnits u) {
+        return f.inDistance() ? u::distance : u::time;
+    }
+
+    /** A chart with its x values (and y values, band included) converted, and its labels replaced (null keeps). */
+    static ChartSpec converted(ChartSpec c, DoubleUnaryOperator x, String xLabel, DoubleUnaryOperator y,
+                               String yLabel) {
+        List<ChartSpec.Curve> curves = new ArrayList<>();
+        for (ChartSpec.Curve k : c.curves()) {
+            // every curve, the end-of-simulation marker included, is in the plot's units
+            curves.add(new ChartSpec.Curve(k.name(), map(k.x(), x), map(k.y(), y), map(k.low(), y),
+                    map(k.high(), y), k.dashed(), k.colour()));
+        }
+        return new ChartSpec(c.title(), xLabel == null ? c.xLabel() : xLabel, yLabel == null ? c.yLabel() : yLabel,
+                c.logX(), c.logY(), curves);
+    }
+
+    private static double[] slice(double[] v, int first, int last) {
+        return java.util.Arrays.copyOfRange(v, first, last + 1);
+    }
+
+    private static double[] map(double[] v, DoubleUnaryOperator f) {
+        if (v == null) {
+            return null;
+        }
+        double[] out = new double[v.length];
+        for (int j = 0; j < v.length; j++) {
+            out[j] = f.applyAsDouble(v[j]);
+        }
+        return out;
+    }
+
+    /**
+     * The concentration against time at each station for the scenario's release, with its 95% band, in the display
+     * units; the detection limit, when given, as a dashed line. Linear axes: a passage is read as a hump.
+     */
+    public static ChartSpec stations(Answers a) {
+        DisplayUnits u = a.units();
+        // the time axis spans the passages (every value above a thousandth of its station's peak), with a quarter
+        // of that span either side: a run lasts until its furthest place is passed, which can dwarf a near passage
+        double from = Double.POSITIVE_INFINITY;
+        double to = 0;
+        for (Answers.StationAnswer s : a.stations()) {
+            double[] t = s.curve().times();
+            double[] c = s.curve().concentration();
+            double floor = 1e-3 * s.curve().peak();
+            for (int j = 0; j < t.length; j++) {
+                if (c[j] > floor) {
+                    from = Math.min(from, t[j]);
+                    to = Math.max(to, t[j]);
+                }
+            }
+        }
+        double margin = 0.25 * (to - from);
+        double start = Math.max(0, from - margin);
+        double end = to + margin;
+        List<ChartSpec.Curve> curves = new ArrayList<>();
+        int colour = 0;
+        DisplayFormat f = new DisplayFormat(u);
+        for (Answers.StationAnswer s : a.stations()) {
+            StationCurve c = s.curve();
+            double[] t = c.times();
+            int first = 0;
+            while (first < t.length - 1 && t[first + 1] < start) {
+                first++;
+            }
+            int last = t.length - 1;
+            while (last > first && t[last - 1] > end) {
+                last--;
+            }
+            String where = f.distance(c.distance()) + (c.sectionMean() ? "" : ", " + f.distance(c.across())
+                    + " across");
+            curves.add(new ChartSpec.Curve("at " + where + " (95% band)", map(slice(t, first, last), u::time),
+                    map(slice(c.concentration(), first, last), u::concentration),
+                    map(slice(c.low(), first, last), u::concentration),
+                    map(slice(c.high(), first, last), u::concentration), false, colour++));
+        }
+        double limit = a.stations().isEmpty() ? Double.NaN : a.stations().get(0).passage().threshold();
+        if (!Double.isNaN(limit) && end > start) {
+            double y = u.concentration(limit);
+            curves.add(new ChartSpec.Curve("detection limit", new double[] {u.time(start), u.time(end)},
+                    new double[] {y, y}, null, null, true, MARKER_COLOUR));
+        }
+        return new ChartSpec("Concentration at the stations", "time after release (" + u.time() + ")",
+                "concentration at the station (" + SummaryContent.concentrationLabel(u) + ")", false, false, curves);
     }
 
     /** The width measure's name, for labels: the visible edge says at which fraction of the peak it lies. */

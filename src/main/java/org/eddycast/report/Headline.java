@@ -47,14 +47,20 @@ public record Headline(String text, List<Figure> figures) {
 
     /**
      * The headline of one study: the answer sentence of its question (the stations, the blend time, in the
-     * scenario's display units) when the result has one, with the figures below.
+     * scenario's display units) when the result has one, then, for a scenario with input ranges, how sure it is
+     * (both intervals of the main figure and the input it is most sensitive to), with the figures below.
      */
     public static Headline of(StudyResult s) {
         Headline built = built(s);
+        String text = built.text();
         if (s.answers() != null && s.answers().headline() != null && !s.answers().headline().isBlank()) {
-            return new Headline(s.answers().headline(), built.figures());
+            text = s.answers().headline();
         }
-        return built;
+        if (s.uncertainty() != null) {
+            // how sure the answer is follows it at once, each interval named for what it covers
+            text += " " + UncertaintyText.headlineLine(s.uncertainty(), s.scenario().forecast().units());
+        }
+        return new Headline(text, built.figures());
     }
 
     private static Headline built(StudyResult s) {

@@ -80,7 +80,7 @@ public final class ResultJson {
         r.notes().forEach(notes::add);
         root.set("meanSquareDisplacement", curve(r));
         if (study.forecast() != null) {
-            forecast(root, study.forecast());
+            forecast(root, study.forecast(), study.scenario().release().mode());
         }
         if (study.transport() != null) {
             TransportJson.write(root, study.transport());
@@ -102,7 +102,7 @@ public final class ResultJson {
         }
     }
 
-    static void forecast(ObjectNode root, Forecast f) {
+    static void forecast(ObjectNode root, Forecast f, String releaseMode) {
         ObjectNode node = root.putObject("forecast");
         node.put("grid", f.inDistance() ? "distance downstream (m)" : "time (s)");
         node.put("widthMeasure", f.measure().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
@@ -111,6 +111,13 @@ public final class ResultJson {
         node.put("simulatedUntil", f.simulatedUntil());
         array(node, f.inDistance() ? "distance" : "time", f.grid());
         array(node, "time", f.times());
+        // SI throughout: the unit of every number beside it
+        ObjectNode units = node.putObject("unit");
+        units.put("simulatedUntil", "s");
+        units.put("time", "s");
+        if (f.inDistance()) {
+            units.put("distance", "m");
+        }
         ObjectNode widths = node.putObject("width");
         widths.put("unit", "m");
         String[] names = {"x", "y", "z"};
@@ -122,7 +129,8 @@ public final class ResultJson {
         }
         ObjectNode peak = node.putObject("peakConcentration");
         peak.put("unit", "kg/m^3");
-        peak.put("release", "instantaneous");
+        peak.put("release", releaseMode.equals(org.eddycast.scenario.Release.OVER_DURATION)
+                ? "over-duration (the whole mass counted as released)" : "instantaneous");
         array(peak, "value", f.peakConcentration());
         if (f.plumeConcentration().length > 0) {
             ObjectNode plume = node.putObject("continuousPlume");

@@ -14,6 +14,7 @@ import org.eddycast.forecast.HandbookEstimate;
 import org.eddycast.scenario.ChannelDesign;
 import org.eddycast.scenario.ChannelFlow;
 import org.eddycast.scenario.DirectFlow;
+import org.eddycast.scenario.DisplayUnits;
 import org.eddycast.scenario.MeasuredFlow;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.TankDesign;
@@ -118,8 +119,9 @@ public record SummaryContent(String title, String scenarioName, String route, St
                     Table.EMPTY, Table.EMPTY, List.of(), Table.EMPTY, "", assumptions, Cautions.ALL, REFERENCES);
         }
         return new SummaryContent("Tracer spreading: screening summary", s.scenario().name(),
-                routeWords(s.scenario()), date(s), s.toolVersion(), inputs(s), results(s), forecastRows(f),
-                forecastTable(f), handbookTable(f), handbookNotes(f), Table.EMPTY, "", assumptions, f.cautions(),
+                routeWords(s.scenario()), date(s), s.toolVersion(), inputs(s), results(s),
+                forecastRows(f, s.scenario().forecast().units()), forecastTable(f, s.scenario().forecast().units()),
+                handbookTable(f), handbookNotes(f), Table.EMPTY, "", assumptions, f.cautions(),
                 REFERENCES);
     }
 
@@ -212,22 +214,39 @@ public record SummaryContent(String title, String scenarioName, String route, St
 
     /** The width measure, each time or distance to mixed with its interval, and how far the simulation reaches. */
     static List<Row> forecastRows(Forecast f) {
+        return forecastRows(f, DisplayUnits.si());
+    }
+
+    /** The same in the scenario's display units: times and distances to mixed, how far the simulation reaches. */
+    static List<Row> forecastRows(Forecast f, DisplayUnits u) {
         List<Row> rows = new ArrayList<>();
         rows.add(new Row("width measure", ChartSpecs.measureName(f), "", ""));
         for (Forecast.MixingFigure m : f.mixing()) {
-            rows.add(new Row(m.name(), number(m.value()), "[" + number(m.low()) + ", " + number(m.high()) + "]",
-                    m.unit()));
+            java.util.function.DoubleUnaryOperator to = m.unit().equals("m") ? u::distance
+                    : m.unit().equals("s") ? u::time : v -> v;
+            String unit = m.unit().equals("m") ? u.distance() : m.unit().equals("s") ? u.time() : m.unit();
+            rows.add(new Row(m.name(), number(to.applyAsDouble(m.value())), "[" + number(to.applyAsDouble(m.low()))
+                    + ", " + number(to.applyAsDouble(m.high())) + "]", unit));
         }
-        rows.add(new Row("widths simulated up to (beyond: sigma\u00b2 + 2 D t)", number(f.simulatedUntil()), "",
-                "s"));
+        rows.add(new Row("widths simulated up to (beyond: sigma\u00b2 + 2 D t)", number(u.time(f.simulatedUntil())),
+                "", u.time()));
         return rows;
     }
 
     /**
      * Widths per axis with their 95% bands and the peak concentration at {@link #TABLE_POINTS} points of the
-     * grid; the last column says whether a width comes from the simulated curve or from 2 D t beyond it.
+     * grid, in SI units; the last column says whether a width comes from the simulated curve or from 2 D t beyond
+     * it.
      */
     public static Table forecastTable(Forecast f) {
+        return forecastTable(f, DisplayUnits.si());
+    }
+
+    /**
+     * The same with the grid's distances and times and the concentrations in the display units (headers name
+     * them); widths stay in metres, the scale of a plume's width whatever the reach.
+     */
+    public static Table forecastTable(Forecast f, DisplayUnits u) {
         double[] grid = f.grid();
         double[] times = f.times();
         double[][] w = f.width();
@@ -236,15 +255,15 @@ public record SummaryContent(String title, String scenarioName, String route, St
         double[] peak = f.peakConcentration();
         String measure = shortMeasure(f);
         List<String> header = new ArrayList<>();
-        header.add(f.inDistance() ? "distance downstream (m)" : "time (s)");
+        header.add(f.inDistance() ? "distance downstream (" + u.distance() + ")" : "time (" + u.time() + ")");
         if (f.inDistance()) {
-            header.add("time (s)");
+            header.add("time (" + u.time() + ")");
         }
         String[] axes = {"x", "y", "z"};
         for (int a = 0; a < w.length; a++) {
             header.add("width along " + axes[a] + ", " + measure + " (m) [95% band]");
         }
-        header.add("peak concentration (kg/m\u00b3)");
+        header.add("peak concentration (" + concentrationLabel(u) + ")");
         header.add("width from");
         List<List<String>> rows = new ArrayList<>();
         int n = grid.length;
@@ -252,18 +271,23 @@ public record SummaryContent(String title, String scenarioName, String route, St
         for (int k = 0; k < points; k++) {
             int j = (int) Math.round((k + 1) * (double) n / points) - 1;
             List<String> row = new ArrayList<>();
-            row.add(number(grid[j]));
+            row.add(number(f.inDistance() ? u.distance(grid[j]) : u.time(grid[j])));
             if (f.inDistance()) {
-                row.add(number(times[j]));
+                row.add(number(u.time(times[j])));
             }
             for (int a = 0; a < w.length; a++) {
                 row.add(number(w[a][j]) + " [" + number(lo[a][j]) + ", " + number(hi[a][j]) + "]");
             }
-            row.add(number(peak[j]));
+            row.add(number(u.concentration(peak[j])));
             row.add(times[j] <= f.simulatedUntil() ? "simulation" : "2 D t beyond it");
             rows.add(row);
         }
         return new Table(header, rows);
+    }
+
+    /** A display unit of concentration as a heading shows it: kg/m\u00b3, mg/L or ug/L. */
+    public static String concentrationLabel(DisplayUnits u) {
+        return u.concentration().equals("kg/m3") ? "kg/m\u00b3" : u.concentration();
     }
 
     /** The width measure in a few words for column headings (FWHM: full width at half maximum). */
@@ -347,7 +371,8 @@ public record SummaryContent(String title, String scenarioName, String route, St
             rows.add(row("tank diameter T", d.tankDiameter(), "m"));
             rows.add(row("liquid height H", d.liquidHeight(), "m"));
             rows.add(row("impeller diameter D", d.impellerDiameter(), "m"));
-            rows.add(row("impeller speed N", d.impellerSpeed(), "rev/s"));
+            DisplayUnits units = sc.forecast().units();
+            rows.add(row("impeller speed N", units.speed(d.impellerSpeed()), units.speed()));
             if (d.impellerType() != null) {
                 rows.add(new Row("impeller", d.impellerType().description(), "", ""));
             }

@@ -7,6 +7,7 @@ import org.eddycast.engine.DiffusivityResult;
 import org.eddycast.engine.StudyResult;
 import org.eddycast.forecast.Comparison;
 import org.eddycast.forecast.Forecast;
+import org.eddycast.scenario.DisplayUnits;
 import org.eddycast.stats.AxisEstimate;
 import org.eddycast.stats.SlopeEstimate;
 
@@ -76,18 +77,21 @@ public final class TextSummary {
         if (f != null) {
             sb.append(String.format(Locale.ROOT, "  forecast (%s; %s):%n", f.inDistance() ? "distance downstream"
                     : "time", f.measure().label()));
-            sb.append(String.format(Locale.ROOT, "    %12s %12s %12s %12s %14s%n", f.inDistance() ? "distance m"
-                    : "time s", "width x m", "width y m", "width z m", "peak kg/m^3"));
+            DisplayUnits u = s.scenario().forecast().units();
+            sb.append(String.format(Locale.ROOT, "    %12s %12s %12s %12s %14s%n", f.inDistance()
+                    ? "distance " + u.distance() : "time " + u.time(), "width x m", "width y m", "width z m",
+                    "peak " + (u.concentration().equals("kg/m3") ? "kg/m^3" : u.concentration())));
             double[] grid = f.grid();
             double[][] w = f.width();
             double[] peak = f.peakConcentration();
             for (int j = 9; j < grid.length; j += 10) {
-                sb.append(String.format(Locale.ROOT, "    %12.4g %12.4g %12.4g %12.4g %14.4g%n", grid[j], w[0][j],
-                        w[1][j], w[2][j], peak[j]));
+                sb.append(String.format(Locale.ROOT, "    %12.4g %12.4g %12.4g %12.4g %14.4g%n",
+                        f.inDistance() ? u.distance(grid[j]) : u.time(grid[j]), w[0][j], w[1][j], w[2][j],
+                        u.concentration(peak[j])));
             }
-            for (Forecast.MixingFigure m : f.mixing()) {
-                sb.append(String.format(Locale.ROOT, "  %s: %.4g %s [%.4g, %.4g]%n", m.name(), m.value(), m.unit(),
-                        m.low(), m.high()));
+            for (SummaryContent.Row m : SummaryContent.forecastRows(f, u).subList(1, f.mixing().size() + 1)) {
+                sb.append("  ").append(m.quantity()).append(": ").append(m.value()).append(' ').append(m.unit())
+                        .append(' ').append(m.interval()).append('\n');
             }
             for (Comparison c : f.handbook()) {
                 sb.append(String.format(Locale.ROOT, "  handbook %s: %.4g %s (%s); simulated %.4g, ratio %.2f, %s%n",

@@ -71,6 +71,7 @@ public final class UncertaintyJson {
             inputRange(o.putObject("inputRange"), f);
             ResultJson.number(o, "mean", f.mean());
             ResultJson.number(o, "median", f.p50());
+            ResultJson.number(o, "noiseShare", f.noiseShare());
         }
         node.put("sensitivityOf", u.figures().get(0).key());
         node.put("advice", u.advice());

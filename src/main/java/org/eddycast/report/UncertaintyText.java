@@ -41,9 +41,11 @@ public final class UncertaintyText {
                     r.basis().isEmpty() ? "" : " (" + r.basis() + ")"));
         }
         for (FigureRange m : u.figures()) {
-            sb.append(String.format(Locale.ROOT, "    %s %s: particles' noise %s; inputs' range 5-95%% %s, median %s%n",
+            sb.append(String.format(Locale.ROOT, "    %s %s: particles' noise %s; inputs' range 5-95%% %s, median %s%s%n",
                     m.label(), value(f, m.unit(), m.nominal()), interval(f, m.unit(), m.mcLow(), m.mcHigh()),
-                    interval(f, m.unit(), m.p05(), m.p95()), value(f, m.unit(), m.p50())));
+                    interval(f, m.unit(), m.p05(), m.p95()), value(f, m.unit(), m.p50()),
+                    Double.isFinite(m.noiseShare()) ? String.format(Locale.ROOT, " (%.0f%% of its variance is the "
+                            + "sampled runs' noise)", 100 * m.noiseShare()) : ""));
         }
         if (!u.sensitivity().isEmpty()) {
             sb.append("    share of the variance of the ").append(u.mainFigure().label())

@@ -18,6 +18,8 @@ import java.util.List;
  *   <li>{@code release.rate} is a continuous source in a channel (the steady plume); a tank forecast has no
  *       continuous source. Given alone it would leave the instantaneous-release peaks for a mass nobody gave,
  *       so {@code release.mass} must be given beside it.</li>
+ *   <li>{@code release.duration} spreads {@code release.mass} evenly over a stated time, seen in a channel's
+ *       station curves: a channel only, with the mass, and never with a rate that goes on.</li>
  * </ul>
  */
 final class Applicability {
@@ -47,10 +49,11 @@ final class Applicability {
         }
         JsonNode forecast = root.path("forecast");
         if (forecast.isObject() && !kind.isEmpty() && !kind.equals("channel")) {
-            for (String f : List.of("stations", "targetPeak", "cap")) {
+            for (String f : List.of("stations", "targetPeak", "cap", "horizonDistance")) {
                 if (forecast.has(f)) {
-                    problems.add("forecast." + f + " applies to a channel only (stations are distances downstream);"
-                            + " remove it");
+                    problems.add("forecast." + f + " applies to a channel only (" + (f.equals("horizonDistance")
+                            ? "a distance downstream; elsewhere give forecast.horizon in s"
+                            : "stations are distances downstream") + "); remove it");
                 }
             }
         }
@@ -69,6 +72,19 @@ final class Applicability {
         if (release.has("location") && !kind.equals("channel")) {
             problems.add("release.location applies to a channel only; remove it" + (kind.equals("tank")
                     ? " and place a tank's dose with release.position { x, y, z } in m" : ""));
+        }
+        if (release.has("duration")) {
+            if (!kind.equals("channel")) {
+                problems.add("release.duration (a constant rate over a stated time) applies to a channel only, where"
+                        + " the stations' curves show it; remove it");
+            } else if (release.has("rate")) {
+                problems.add("release.duration and release.rate: give release.mass with release.duration for a"
+                        + " release at mass / duration per second that stops, or release.rate alone (with the mass"
+                        + " of one dose) for one that goes on; not both");
+            } else if (!release.has("mass")) {
+                problems.add("release.mass is missing: a release over release.duration spreads that mass evenly over"
+                        + " the duration (give the total in kg)");
+            }
         }
         if (release.has("rate")) {
             if (!kind.equals("channel")) {

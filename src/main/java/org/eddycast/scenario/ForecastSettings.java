@@ -14,15 +14,25 @@ import java.util.List;
  * @param cap            a concentration not to exceed at a named distance, or null
  * @param units          the units of the text outputs
  * @param probes         where a tank's virtual probes stand (a tank only); empty for the usual three
+ * @param horizonDistance in a channel, the forecast's reach as a distance downstream (m) instead of a time; NaN
+ *                       for none
  */
 public record ForecastSettings(double horizon, String widthMeasure, double edgeFraction, List<Station> stations,
                                double detectionLimit, double targetPeak, ConcentrationCap cap, DisplayUnits units,
-                               List<ProbePoint> probes) {
+                               List<ProbePoint> probes, double horizonDistance) {
 
     public ForecastSettings {
         stations = stations == null ? List.of() : List.copyOf(stations);
         units = units == null ? DisplayUnits.si() : units;
         probes = probes == null ? List.of() : List.copyOf(probes);
+    }
+
+    /** Settings with the horizon as a time (or chosen by the tool). */
+    public ForecastSettings(double horizon, String widthMeasure, double edgeFraction, List<Station> stations,
+                            double detectionLimit, double targetPeak, ConcentrationCap cap, DisplayUnits units,
+                            List<ProbePoint> probes) {
+        this(horizon, widthMeasure, edgeFraction, stations, detectionLimit, targetPeak, cap, units, probes,
+                Double.NaN);
     }
 
     /** Settings with the usual probes. */

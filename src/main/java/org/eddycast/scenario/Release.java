@@ -11,11 +11,26 @@ package org.eddycast.scenario;
  * @param volume     volume of the injected solution (m^3), NaN when not given; its concentration M / V caps every
  *                   reported concentration
  * @param given      false when the scenario had no release block and the mass is the assumed 1 kg
+ * @param duration   for a release at a constant rate over a stated time: that time (s), the mass going in at
+ *                   mass / duration per second; NaN for a slug or a continuous release
  */
-public record Release(double mass, double rate, double[] position, boolean atBank, double volume, boolean given) {
+public record Release(double mass, double rate, double[] position, boolean atBank, double volume, boolean given,
+                      double duration) {
+
+    /** The mode of a slug: the whole mass at once. */
+    public static final String SLUG = "slug";
+    /** The mode of a release at a constant rate over a stated duration. */
+    public static final String OVER_DURATION = "over-duration";
+    /** The mode of a release that goes on (release.rate). */
+    public static final String CONTINUOUS = "continuous";
 
     public Release {
         position = position == null ? null : position.clone();
+    }
+
+    /** A release all at once or continuous (no stated duration). */
+    public Release(double mass, double rate, double[] position, boolean atBank, double volume, boolean given) {
+        this(mass, rate, position, atBank, volume, given, Double.NaN);
     }
 
     /** A release the scenario gave, with no volume. */
@@ -28,9 +43,9 @@ public record Release(double mass, double rate, double[] position, boolean atBan
         return Double.isNaN(volume) ? Double.POSITIVE_INFINITY : mass / volume;
     }
 
-    /** "continuous" with a rate, otherwise "slug" (an instantaneous release). */
+    /** "continuous" with a rate, "over-duration" with a duration, otherwise "slug" (an instantaneous release). */
     public String mode() {
-        return Double.isNaN(rate) ? "slug" : "continuous";
+        return !Double.isNaN(rate) ? CONTINUOUS : Double.isNaN(duration) ? SLUG : OVER_DURATION;
     }
 
     @Override

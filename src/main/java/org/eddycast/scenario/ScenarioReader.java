@@ -368,7 +368,8 @@ public final class ScenarioReader {
             p.rejectUnknown();
         }
         double volume = r.number("volume", "m^3", 0, 1e6, true, Double.NaN, false);
-        return new Release(mass, rate, position, where.equals("bank"), volume, true);
+        double duration = r.number("duration", "s", 0, 1e7, true, Double.NaN, false);
+        return new Release(mass, rate, position, where.equals("bank"), volume, true, duration);
     }
 
     private static ForecastSettings readForecast(FieldReader r) {
@@ -409,7 +410,8 @@ public final class ScenarioReader {
         if (u != null) {
             units = new DisplayUnits(u.choice("concentration", DisplayUnits.CONCENTRATIONS, "kg/m3", false),
                     u.choice("time", DisplayUnits.TIMES, "s", false),
-                    u.choice("distance", DisplayUnits.DISTANCES, "m", false));
+                    u.choice("distance", DisplayUnits.DISTANCES, "m", false),
+                    u.choice("speed", DisplayUnits.SPEEDS, "rev/s", false));
             u.rejectUnknown();
         }
         List<ProbePoint> probes = new java.util.ArrayList<>();
@@ -424,7 +426,12 @@ public final class ScenarioReader {
                 item.rejectUnknown();
             }
         }
-        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units, probes);
+        double reach = r.number("horizonDistance", "m", 0, 1e7, true, Double.NaN, false);
+        if (!Double.isNaN(reach) && !Double.isNaN(horizon)) {
+            r.problem(r.name("horizon") + " and " + r.name("horizonDistance") + " both set the forecast's reach: keep"
+                    + " one of them (a time in s, or in a channel a distance downstream in m)");
+        }
+        return new ForecastSettings(horizon, measure, edge, stations, detection, target, cap, units, probes, reach);
     }
 
     /** The most stations one forecast reads (each keeps its own counts per block and record). */
@@ -433,7 +440,28 @@ public final class ScenarioReader {
     private static Substance readSubstance(FieldReader s) {
         String name = s.text("name", "", false);
         double d0 = s.number("molecularDiffusivity", "m^2/s", 0, 1.0, true, 1e-9, true);
-        return new Substance(name, d0);
+        return new Substance(name, d0, readLoss(s));
+    }
+
+    /** The most rapid first-order loss read: a half-life of a tenth of a second is already no tracer at all. */
+    static final double MAX_DECAY_RATE = 10.0;
+
+    /** substance.decayRate (1/s) or substance.halfLife (s), one of them or neither. */
+    private static FirstOrderLoss readLoss(FieldReader s) {
+        boolean rate = s.has("decayRate");
+        boolean half = s.has("halfLife");
+        double k = s.number("decayRate", "1/s", 0, MAX_DECAY_RATE, true, Double.NaN, false);
+        double h = s.number("halfLife", "s", Math.log(2) / MAX_DECAY_RATE, Double.POSITIVE_INFINITY, false,
+                Double.NaN, false);
+        if (rate && half) {
+            s.problem(s.name("decayRate") + " and " + s.name("halfLife") + " both give the first-order loss: keep one"
+                    + " of them (a rate k in 1/s, or a half-life ln 2 / k in s)");
+            return FirstOrderLoss.NONE;
+        }
+        if (!Double.isNaN(k)) {
+            return FirstOrderLoss.ofRate(k);
+        }
+        return Double.isNaN(h) ? FirstOrderLoss.NONE : FirstOrderLoss.ofHalfLife(h);
     }
 
     private static SimulationSettings readSimulation(FieldReader s, FlowSpec flow) {

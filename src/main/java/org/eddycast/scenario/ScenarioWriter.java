@@ -46,11 +46,20 @@ public final class ScenarioWriter {
             substance.put("name", s.substance().name());
         }
         substance.put("molecularDiffusivity", s.substance().molecularDiffusivity());
+        FirstOrderLoss loss = s.substance().loss();
+        if (loss.present()) {
+            if (loss.givenAsHalfLife()) {
+                substance.put("halfLife", loss.halfLife());
+            } else {
+                substance.put("decayRate", loss.rate());
+            }
+        }
         if (s.release().given()) {
             release(root.putObject("release"), s.release(), s.flow());
         }
         ObjectNode forecast = root.putObject("forecast");
         optional(forecast, "horizon", s.forecast().horizon());
+        optional(forecast, "horizonDistance", s.forecast().horizonDistance());
         forecast.put("widthMeasure", s.forecast().widthMeasure());
         forecast.put("edgeFraction", s.forecast().edgeFraction());
         stations(forecast, s.forecast());
@@ -187,6 +196,7 @@ public final class ScenarioWriter {
             u.put("concentration", f.units().concentration());
             u.put("time", f.units().time());
             u.put("distance", f.units().distance());
+            u.put("speed", f.units().speed());
         }
     }
 
@@ -196,6 +206,7 @@ public final class ScenarioWriter {
         optional(n, "volume", r.volume());
         if (flow instanceof ChannelFlow) {
             optional(n, "rate", r.rate());
+            optional(n, "duration", r.duration());
             n.put("location", r.atBank() ? "bank" : "centre-line");
         }
         if (r.position() != null && flow instanceof TankFlow) {

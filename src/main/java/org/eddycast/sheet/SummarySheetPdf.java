@@ -51,8 +51,9 @@ public final class SummarySheetPdf {
     }
 
     /**
-     * The charts a study's sheet carries: plume width with its band and the handbook curves, peak
-     * concentration, and the running diffusivity settling; without a forecast, the cloud's spread instead.
+     * The charts a study's sheet carries, in the scenario's display units: plume width with its band and the
+     * handbook curves, peak concentration, and the running diffusivity settling (with stations, their
+     * concentration against time first, in place of the settling); without a forecast, the cloud's spread instead.
      */
     public static List<ChartSpec> defaultCharts(StudyResult result) {
         SpreadCurves c = SpreadCurves.of(result.diffusivity());
@@ -60,8 +61,14 @@ public final class SummarySheetPdf {
         if (result.forecast() == null) {
             return List.of(ChartSpecs.spread(c, "Spread of the particle cloud"), settling);
         }
-        return List.of(ChartSpecs.width(result.forecast(), "Plume width"), ChartSpecs.peak(result.forecast()),
-                settling);
+        org.eddycast.scenario.DisplayUnits units = result.scenario().forecast().units();
+        ChartSpec width = ChartSpecs.width(result.forecast(), "Plume width", units);
+        ChartSpec peak = ChartSpecs.peak(result.forecast(), units);
+        // a dye test is planned by its stations' curves: they take the place of the run's settling
+        if (result.answers() != null && !result.answers().stations().isEmpty()) {
+            return List.of(ChartSpecs.stations(result.answers()), width, peak);
+        }
+        return List.of(width, peak, settling);
     }
 
     /** The comparison sheet of design options (two or more): side by side, overlaid widths, the verdict. */

@@ -63,15 +63,29 @@ public record StationCurve(double distance, double across, double[] times, doubl
 
     /** The same curve for a release scaled by a positive factor: concentrations are linear in the mass. */
     public StationCurve scaled(double factor) {
+        return multiplied(j -> factor);
+    }
+
+    /**
+     * The same curve for a tracer lost at first order with rate {@code k} (1/s): each value times exp(-k t) at
+     * its record time t, the solution of dc/dt = -k c. Its peak is read again from the new values.
+     */
+    public StationCurve decayed(double k) {
+        return multiplied(j -> Math.exp(-k * times[j]));
+    }
+
+    /** Every value (curve, band, one-particle resolution) at record j times {@code factor(j)}. */
+    private StationCurve multiplied(java.util.function.IntToDoubleFunction factor) {
         double[] c = concentration.clone();
         double[] l = low.clone();
         double[] h = high.clone();
         double[] one = oneParticle.clone();
         for (int j = 0; j < c.length; j++) {
-            c[j] *= factor;
-            l[j] *= factor;
-            h[j] *= factor;
-            one[j] *= factor;
+            double f = factor.applyAsDouble(j);
+            c[j] *= f;
+            l[j] *= f;
+            h[j] *= f;
+            one[j] *= f;
         }
         return new StationCurve(distance, across, times, c, l, h, binWidth, one);
     }

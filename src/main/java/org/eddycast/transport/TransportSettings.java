@@ -51,10 +51,30 @@ public record TransportSettings(int blocks, int blockSize, double timeStep, long
      */
     public static TransportSettings stage(int particles, double duration, double maxStep, int records, int early,
                                           long seed) {
+        return stage(particles, duration, maxStep, records, early, seed, new double[0]);
+    }
+
+    /**
+     * As {@link #stage(int, double, double, int, int, long)}, with records also at the given times (each at the
+     * nearest step; times outside the run are dropped): a station's passage read densely.
+     */
+    public static TransportSettings stage(int particles, double duration, double maxStep, int records, int early,
+                                          long seed, double[] extraTimes) {
         long steps = Math.max(records, (long) Math.ceil(duration / maxStep));
         steps = (steps + records - 1) / records * records;
-        return new TransportSettings(STAGE_BLOCKS, stageBlockSize(particles), duration / steps, steps,
-                mixedRecords(steps, early, records), seed);
+        double dt = duration / steps;
+        java.util.TreeSet<Long> set = new java.util.TreeSet<>();
+        for (long step : mixedRecords(steps, early, records)) {
+            set.add(step);
+        }
+        for (double t : extraTimes) {
+            long step = Math.round(t / dt);
+            if (step >= 1 && step <= steps) {
+                set.add(step);
+            }
+        }
+        return new TransportSettings(STAGE_BLOCKS, stageBlockSize(particles), dt, steps,
+                set.stream().mapToLong(Long::longValue).toArray(), seed);
     }
 
     /**

@@ -2,20 +2,31 @@ package org.eddycast.ui;
 
 import java.awt.Font;
 import java.awt.Graphics2D;
+import java.awt.RenderingHints;
 import java.awt.event.KeyEvent;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.awt.print.PrinterException;
 import java.awt.print.PrinterJob;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.function.Supplier;
+import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
+import javax.imageio.ImageTypeSpecifier;
+import javax.imageio.ImageWriteParam;
+import javax.imageio.ImageWriter;
+import javax.imageio.metadata.IIOMetadata;
+import javax.imageio.metadata.IIOMetadataNode;
+import javax.imageio.stream.ImageOutputStream;
 import javax.swing.Action;
 import org.eddycast.engine.StudyResult;
+import org.eddycast.forecast.Cautions;
 import org.eddycast.plugin.HostContext;
+import org.eddycast.sheet.CautionBlock;
 import org.eddycast.sheet.ChartRendering;
 import org.eddycast.sheet.SensitivityChart;
 import org.eddycast.report.ChartSpec;
@@ -26,8 +37,15 @@ import org.eddycast.scenario.AtomicFiles;
 import org.eddycast.uncertainty.UncertaintySummary;
 import org.jfree.svg.SVGGraphics2D;
 
-/** The panel's outputs: the summary sheet (PDF, print), the charts (PNG, SVG) and the curves (CSV). */
+/**
+ * The panel's outputs: the summary sheet (PDF, print), the charts (PNG, SVG) and the curves (CSV). Every one
+ * carries the cautions: the sheet and the CSV in their text, the pictures in a block drawn under the charts.
+ */
 final class Exports {
+
+    private static final int WIDTH = 900;
+    private static final int CHART_HEIGHT = 420;
+    private static final Font FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
 
     private final HostContext host;
     private final Dialogs dialogs;
@@ -120,49 +138,94 @@ final class Exports {
 
     /**
      * The charts stacked in one PNG, 900 by 420 pixels each, then the inputs' ranking when the result has an
-     * uncertainty part (null: none).
+     * uncertainty part with indices (null: none), the cautions under them.
      */
     static void writePng(List<ChartSpec> charts, UncertaintySummary sensitivity, Path target) throws IOException {
-        int w = 900;
-        int h = 420;
-        BufferedImage img = new BufferedImage(w, totalHeight(charts, sensitivity, h), BufferedImage.TYPE_INT_RGB);
+        byte[] png = png(charts, sensitivity);
+        AtomicFiles.write(target, out -> out.write(png));
+    }
+
+    /** The charts stacked in one SVG document, then the inputs' ranking if any, the cautions under them. */
+    static void writeSvg(List<ChartSpec> charts, UncertaintySummary sensitivity, Path target) throws IOException {
+        AtomicFiles.writeString(target, svg(charts, sensitivity));
+    }
+
+    /**
+     * The PNG's bytes: the charts, the cautions drawn under them, and the cautions again as the PNG's standard
+     * "Disclaimer" text (PNG specification, ISO/IEC 15948, keyword list) so a program reading the file finds them.
+     */
+    static byte[] png(List<ChartSpec> charts) throws IOException {
+        return png(charts, null);
+    }
+
+    /** The PNG's bytes with the inputs' ranking after the charts (null: none). */
+    static byte[] png(List<ChartSpec> charts, UncertaintySummary sensitivity) throws IOException {
+        int h = chartsHeight(charts, sensitivity);
+        CautionBlock cautions = new CautionBlock(FONT, WIDTH);
+        BufferedImage img = new BufferedImage(WIDTH, h + cautions.height(), BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
-            draw(charts, sensitivity, g, w, h);
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            draw(charts, sensitivity, g);
+            cautions.draw(g, h);
         } finally {
             g.dispose();
         }
-        AtomicFiles.write(target, out -> ImageIO.write(img, "png", out));
+        ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try (ImageOutputStream out = ImageIO.createImageOutputStream(bytes)) {
+            writer.setOutput(out);
+            ImageWriteParam param = writer.getDefaultWriteParam();
+            IIOMetadata meta = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(img), param);
+            IIOMetadataNode entry = new IIOMetadataNode("tEXtEntry");
+            entry.setAttribute("keyword", "Disclaimer");
+            entry.setAttribute("value", String.join("\n", Cautions.lines("")));
+            IIOMetadataNode text = new IIOMetadataNode("tEXt");
+            text.appendChild(entry);
+            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
+            root.appendChild(text);
+            meta.mergeTree("javax_imageio_png_1.0", root);
+            writer.write(null, new IIOImage(img, null, meta), param);
+        } finally {
+            writer.dispose();
+        }
+        return bytes.toByteArray();
     }
 
-    /** The charts stacked in one SVG document, then the inputs' ranking when there is one (null: none). */
-    static void writeSvg(List<ChartSpec> charts, UncertaintySummary sensitivity, Path target) throws IOException {
-        int w = 900;
-        int h = 420;
-        SVGGraphics2D g = new SVGGraphics2D(w, totalHeight(charts, sensitivity, h));
-        draw(charts, sensitivity, g, w, h);
-        AtomicFiles.writeString(target, g.getSVGDocument());
+    /** The SVG document: the charts, then the cautions as text under them. */
+    static String svg(List<ChartSpec> charts) {
+        return svg(charts, null);
+    }
+
+    /** The SVG document with the inputs' ranking after the charts (null: none). */
+    static String svg(List<ChartSpec> charts, UncertaintySummary sensitivity) {
+        int h = chartsHeight(charts, sensitivity);
+        CautionBlock cautions = new CautionBlock(FONT, WIDTH);
+        SVGGraphics2D g = new SVGGraphics2D(WIDTH, h + cautions.height());
+        draw(charts, sensitivity, g);
+        cautions.draw(g, h);
+        return g.getSVGDocument();
     }
 
     private static boolean ranked(UncertaintySummary sensitivity) {
         return sensitivity != null && !sensitivity.sensitivity().isEmpty();
     }
 
-    private static int totalHeight(List<ChartSpec> charts, UncertaintySummary sensitivity, int h) {
-        int height = h * charts.size() + (ranked(sensitivity) ? h : 0);
-        return Math.max(h, height);
+    /** The height the charts take (at least one chart's), the ranking counted as one more. */
+    private static int chartsHeight(List<ChartSpec> charts, UncertaintySummary sensitivity) {
+        return CHART_HEIGHT * Math.max(1, charts.size() + (ranked(sensitivity) ? 1 : 0));
     }
 
-    private static void draw(List<ChartSpec> charts, UncertaintySummary sensitivity, Graphics2D g, int w, int h) {
+    private static void draw(List<ChartSpec> charts, UncertaintySummary sensitivity, Graphics2D g) {
         g.setColor(java.awt.Color.WHITE);
-        g.fillRect(0, 0, w, totalHeight(charts, sensitivity, h));
-        Font font = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
+        g.fillRect(0, 0, WIDTH, chartsHeight(charts, sensitivity));
         for (int i = 0; i < charts.size(); i++) {
-            ChartRendering.draw(charts.get(i), ChartRendering.PAPER, font, g, new Rectangle2D.Double(0, i * h, w, h));
+            ChartRendering.draw(charts.get(i), ChartRendering.PAPER, FONT, g,
+                    new Rectangle2D.Double(0, i * CHART_HEIGHT, WIDTH, CHART_HEIGHT));
         }
         if (ranked(sensitivity)) {
-            SensitivityChart.draw(sensitivity, ChartRendering.PAPER, font, g,
-                    new Rectangle2D.Double(0, charts.size() * h, w, h));
+            SensitivityChart.draw(sensitivity, ChartRendering.PAPER, FONT, g,
+                    new Rectangle2D.Double(0, charts.size() * CHART_HEIGHT, WIDTH, CHART_HEIGHT));
         }
     }
 

@@ -52,7 +52,9 @@ public final class FormLayout {
             new Section("section.release", List.of(
                     FieldSpec.text("substance.name", null, true),
                     FieldSpec.number("substance.molecularDiffusivity", "m\u00b2/s", null, false),
+                    FieldSpec.number("substance.halfLife", "s", null, true),
                     FieldSpec.number("release.mass", "kg", null, true),
+                    FieldSpec.number("release.duration", "s", "channel", true),
                     FieldSpec.number("release.rate", "kg/s", "channel", true),
                     FieldSpec.choice("release.location", "channel", List.of("centre-line", "bank")),
                     FieldSpec.number("release.position.x", "m", "tank", true),
@@ -60,6 +62,7 @@ public final class FormLayout {
                     FieldSpec.number("release.position.z", "m", "tank", true))),
             new Section("section.forecast", List.of(
                     FieldSpec.number("forecast.horizon", "s", null, true),
+                    FieldSpec.number("forecast.horizonDistance", "m", "channel", true),
                     // the scenario file's default (full width at half maximum) first, so an empty form shows it
                     FieldSpec.choice("forecast.widthMeasure", null, List.of("fwhm", "standard-deviation",
                             "visible-edge")),

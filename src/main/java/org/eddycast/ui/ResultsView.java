@@ -24,6 +24,7 @@ import org.eddycast.report.ChartSpecs;
 import org.eddycast.report.Headline;
 import org.eddycast.report.SpreadCurves;
 import org.eddycast.report.SummaryContent;
+import org.eddycast.scenario.DisplayUnits;
 import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
@@ -44,6 +45,7 @@ final class ResultsView extends JPanel {
 
     private static final String WIDTH = "Plume width";
     private static final String PEAK = "Peak concentration";
+    private static final String STATIONS = "Concentration at the stations";
     private static final String RUNNING = "Running estimate of the eddy diffusivity";
     private static final String SPREAD = "Spread of the particle cloud";
     private static final String SPECTRUM = "Velocity spectrum of the record";
@@ -52,7 +54,8 @@ final class ResultsView extends JPanel {
     private final JTabbedPane tabs = new JTabbedPane();
     private final ChartDeck curves = new ChartDeck("curves", entries(
             WIDTH, "The forecast plume width appears here when a run finishes.",
-            PEAK, "The forecast peak concentration appears here when a run finishes."));
+            PEAK, "The forecast peak concentration appears here when a run finishes.",
+            STATIONS, "In a channel with stations, the concentration against time at each appears here."));
     private final ChartDeck quality = new ChartDeck("quality", entries(
             RUNNING, "The running eddy diffusivity appears here while the simulation runs.",
             SPREAD, "The spread of the particle cloud appears here while the simulation runs.",
@@ -118,8 +121,12 @@ final class ResultsView extends JPanel {
         showEmpty();
     }
 
+    /** Adds a tab whose body stands over the one-line cautions footer that every results tab carries. */
     private void addTab(String title, int mnemonic, JComponent body, String tip) {
-        tabs.addTab(title, null, body, tip);
+        JPanel page = new JPanel(new BorderLayout());
+        page.add(body, BorderLayout.CENTER);
+        page.add(new CautionFooter(this::showCautions), BorderLayout.SOUTH);
+        tabs.addTab(title, null, page, tip);
         tabs.setMnemonicAt(tabs.getTabCount() - 1, mnemonic);
     }
 
@@ -169,6 +176,35 @@ final class ResultsView extends JPanel {
         if (stale != null) {
             styleStale();
         }
+    }
+
+    /** Brings the full list of cautions into view: the Inputs and cautions tab, scrolled to the list. */
+    void showCautions() {
+        tabs.setSelectedIndex(INPUTS_TAB);
+        reasoning.revalidate();
+        javax.swing.SwingUtilities.invokeLater(() -> {
+            int at = reasoning.getText().indexOf(Cautions.HEADING + "\n");
+            try {
+                java.awt.geom.Rectangle2D r = reasoning.modelToView2D(Math.max(0, at));
+                if (r != null) {
+                    java.awt.Rectangle view = r.getBounds();
+                    view.height = Math.max(view.height, reasoning.getVisibleRect().height);
+                    reasoning.scrollRectToVisible(view);
+                }
+            } catch (javax.swing.text.BadLocationException e) {
+                // the text changed meanwhile: the tab is shown, which is what matters
+            }
+        });
+    }
+
+    /** Shows one chart of the Curves tab by its title (for tests and screenshots). */
+    void showChart(String title) {
+        curves.select(title);
+    }
+
+    /** The cautions footer of a tab (for tests). */
+    CautionFooter footer(int tab) {
+        return (CautionFooter) ((JPanel) tabs.getComponentAt(tab)).getComponent(1);
     }
 
     OptionsView options() {
@@ -274,6 +310,7 @@ final class ResultsView extends JPanel {
         headline.show(null, "No result yet: fill in the form and press Run (Ctrl+R).");
         curves.set(WIDTH, null, "The forecast plume width appears here when a run finishes.");
         curves.set(PEAK, null, "The forecast peak concentration appears here when a run finishes.");
+        curves.set(STATIONS, null, "In a channel with stations, the concentration against time at each appears here.");
         quality.set(RUNNING, null, "The running eddy diffusivity appears here while the simulation runs.");
         quality.set(SPREAD, null, "The spread of the particle cloud appears here while the simulation runs.");
         quality.set(SPECTRUM, null, null);
@@ -373,14 +410,22 @@ final class ResultsView extends JPanel {
         if (f == null) {
             curves.set(WIDTH, null, "This result carries no forecast.");
             curves.set(PEAK, null, "This result carries no forecast.");
+            curves.set(STATIONS, null, "This result carries no forecast.");
             forecastTable.show(SummaryContent.Table.EMPTY);
             handbookTable.show(SummaryContent.Table.EMPTY);
             mixing.setText("This result carries no forecast.");
             handbookNotes.setText("No handbook estimate applies without a forecast.");
             return;
         }
-        curves.set(WIDTH, ChartSpecs.width(f, "Plume width"), null);
-        curves.set(PEAK, ChartSpecs.peak(f), null);
+        DisplayUnits units = s.scenario().forecast().units();
+        curves.set(WIDTH, ChartSpecs.width(f, "Plume width", units), null);
+        curves.set(PEAK, ChartSpecs.peak(f, units), null);
+        if (s.answers() != null && !s.answers().stations().isEmpty()) {
+            curves.set(STATIONS, ChartSpecs.stations(s.answers()), null);
+        } else {
+            curves.set(STATIONS, null, "No stations: in a channel, list them under forecast.stations (distances "
+                    + "downstream) to see the concentration against time at each.");
+        }
         forecastTable.show(content.forecastTable());
         StringBuilder sb = new StringBuilder();
         for (SummaryContent.Row row : content.forecast()) {
@@ -424,7 +469,7 @@ final class ResultsView extends JPanel {
             }
             sb.append('\n');
         }
-        sb.append("Cautions\n");
+        sb.append(Cautions.HEADING).append('\n');
         for (String c : cautions) {
             sb.append("\u2022 ").append(c).append('\n');
         }

@@ -390,11 +390,14 @@ public final class ScenarioForm extends JPanel {
         if (tree.get("release") instanceof ObjectNode release) {
             // the reader refuses a release field of another route: it goes with the route it belonged to
             if (!kind.equals("channel")) {
-                release.remove(List.of("location", "rate"));
+                release.remove(List.of("location", "rate", "duration"));
             }
             if (!kind.equals("tank")) {
                 release.remove("position");
             }
+        }
+        if (!kind.equals("channel") && tree.get("forecast") instanceof ObjectNode forecast) {
+            forecast.remove("horizonDistance");
         }
         for (FieldRow row : rows) {
             if (!row.visible()) {

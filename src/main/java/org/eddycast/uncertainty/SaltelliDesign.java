@@ -12,8 +12,16 @@ import org.apache.commons.math3.random.SobolSequenceGenerator;
  *
  * <p>A and B come from one 2k-dimensional Sobol sequence (Commons Math's {@link SobolSequenceGenerator}, with
  * the Joe and Kuo direction numbers): the sequence's point j + 1 gives A's row j from its dimensions 0..k-1 and
- * B's row j from its dimensions k..2k-1. The sequence's first point, all zeros, is skipped: its quantiles would
- * be infinite for unbounded inputs. Every later coordinate is a dyadic fraction strictly between 0 and 1.
+ * B's row j from its dimensions k..2k-1. The sequence's first point, all zeros, is skipped.
+ *
+ * <p>Each dimension is then shifted by its own fixed offset, modulo 1 (a Cranley-Patterson rotation: Cranley &amp;
+ * Patterson 1976, "Randomization of number theoretic methods for multiple integration", SIAM J. Numer. Anal.
+ * 13:904-914). Unshifted, a short Sobol sequence's dimensions take the same few dyadic values: its second point is
+ * 0.5 in every dimension, so A's and B's first rows would both sit at every input's median, and at N = 8 many rows
+ * of B would repeat rows of A, leaving fewer distinct points than runs. The rotation keeps each dimension's
+ * equidistribution and breaks those coincidences. The offsets come from a fixed integer hash of the dimension's
+ * index (SplitMix64: Steele, Lea &amp; Flood 2014, "Fast splittable pseudorandom number generators", OOPSLA), so
+ * they are the same in every process.
  *
  * <p>Rows are numbered: [0, N) are A, [N, 2N) are B, then [(2 + i) N, (3 + i) N) are AB_i for i = 0..k-1.
  * A row's point is a pure function of (N, k, row), computed with integer operations and one exact division by
@@ -54,9 +62,28 @@ public final class SaltelliDesign {
         SobolSequenceGenerator sobol = new SobolSequenceGenerator(width);
         sobol.nextVector(); // the first point, all zeros
         points = new double[baseSamples * width];
-        for (int j = 0; j < baseSamples; j++) {
-            System.arraycopy(sobol.nextVector(), 0, points, j * width, width);
+        double[] offsets = new double[width];
+        for (int d = 0; d < width; d++) {
+            offsets[d] = offset(d);
         }
+        for (int j = 0; j < baseSamples; j++) {
+            double[] v = sobol.nextVector();
+            for (int d = 0; d < width; d++) {
+                double u = v[d] + offsets[d];
+                u = u >= 1 ? u - 1 : u;
+                // never 0: the quantile of an unbounded input would be infinite there
+                points[j * width + d] = u > 0 ? u : 0x1p-53;
+            }
+        }
+    }
+
+    /** Dimension d's fixed offset in [0, 1): the top 53 bits of SplitMix64's output for d. */
+    static double offset(int d) {
+        long z = 0x9E3779B97F4A7C15L * (d + 1L);
+        z = (z ^ (z >>> 30)) * 0xBF58476D1CE4E5B9L;
+        z = (z ^ (z >>> 27)) * 0x94D049BB133111EBL;
+        z = z ^ (z >>> 31);
+        return (z >>> 11) * 0x1p-53;
     }
 
     public int baseSamples() {

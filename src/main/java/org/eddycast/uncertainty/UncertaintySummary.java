@@ -56,9 +56,12 @@ public record UncertaintySummary(List<RangedInput> inputs, int baseSamples, int 
      * @param p05     the 5th percentile over the sampled inputs
      * @param p50     the median
      * @param p95     the 95th percentile
+     * @param noiseShare the share of the sample's variance that is the sampled runs' own Monte Carlo noise (their
+     *                mean squared standard error over the sample's variance, at most 1), NaN when the figure
+     *                has no Monte Carlo interval
      */
     public record FigureRange(String key, String label, String unit, double nominal, double mcLow, double mcHigh,
-                              double mean, double p05, double p50, double p95) {
+                              double mean, double p05, double p50, double p95, double noiseShare) {
     }
 
     /**

@@ -101,6 +101,10 @@ class CommandLineTest {
         assertTrue(compareText.contains("centre-line") || compareText.contains("Centre-line")
                 || compareText.contains("centre line"), compareText);
         assertTrue(compareText.contains("licensed professionals"), "cautions on the comparison sheet");
+        // and on standard output, every one of them, after the verdict
+        for (String caution : org.eddycast.forecast.Cautions.ALL) {
+            assertTrue(c.out().contains(caution), () -> "compare prints no caution \"" + caution + "\": " + c.out());
+        }
     }
 
     private static String pdfText(Path pdf) throws Exception {

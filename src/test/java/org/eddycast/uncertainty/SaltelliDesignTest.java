@@ -43,25 +43,41 @@ class SaltelliDesignTest {
     }
 
     @Test
-    void aAndBAreTheTwoHalvesOfOneSobolPointAfterTheSkippedZero() {
+    void aAndBAreTheTwoHalvesOfOneRotatedSobolPointAfterTheSkippedZero() {
         // A Sobol sequence starts at the origin and its next point is (1/2, ..., 1/2) in every dimension
         // (Bratley & Fox 1988, Algorithm 659, ACM Trans. Math. Softw. 14:88; Joe & Kuo 2008, SIAM J. Sci.
-        // Comput. 30:2635); the third has 1/4 or 3/4 in each dimension. So A's and B's first rows are all 1/2,
-        // and no row is the origin.
+        // Comput. 30:2635). Each dimension d is shifted by its own offset modulo 1 (Cranley & Patterson 1976), so
+        // A's row j is point j + 1's first k coordinates shifted, and B's row j its last k shifted.
         SaltelliDesign d = new SaltelliDesign(8, 2);
-        assertArrayEquals(new double[] {0.5, 0.5}, d.unitPoint(0), 0);
-        assertArrayEquals(new double[] {0.5, 0.5}, d.unitPoint(8), 0);
-        for (double u : d.unitPoint(1)) {
-            assertTrue(u == 0.25 || u == 0.75, "second row " + u);
-        }
         org.apache.commons.math3.random.SobolSequenceGenerator sobol =
                 new org.apache.commons.math3.random.SobolSequenceGenerator(4);
         sobol.nextVector();
-        sobol.nextVector();
-        sobol.nextVector();
-        double[] third = sobol.nextVector();
-        assertArrayEquals(new double[] {third[0], third[1]}, d.unitPoint(2), 0);
-        assertArrayEquals(new double[] {third[2], third[3]}, d.unitPoint(8 + 2), 0);
+        for (int j = 0; j < 8; j++) {
+            double[] p = sobol.nextVector();
+            double[] a = d.unitPoint(j);
+            double[] b = d.unitPoint(8 + j);
+            for (int c = 0; c < 2; c++) {
+                assertEquals(rotated(p[c], SaltelliDesign.offset(c)), a[c], 0.0);
+                assertEquals(rotated(p[2 + c], SaltelliDesign.offset(2 + c)), b[c], 0.0);
+                assertTrue(a[c] > 0 && a[c] < 1 && b[c] > 0 && b[c] < 1);
+            }
+        }
+        // the unrotated sequence would put A's and B's first rows both at (1/2, 1/2); rotated, no row of B repeats
+        // a row of A in any coordinate
+        for (int j = 0; j < 8; j++) {
+            for (int m = 0; m < 8; m++) {
+                double[] a = d.unitPoint(j);
+                double[] b = d.unitPoint(8 + m);
+                assertTrue(a[0] != b[0] && a[1] != b[1], "A row " + j + " and B row " + m);
+            }
+        }
+        // offsets are spread over [0, 1) and differ between dimensions
+        assertTrue(SaltelliDesign.offset(0) != SaltelliDesign.offset(1));
+    }
+
+    private static double rotated(double x, double offset) {
+        double u = x + offset;
+        return u >= 1 ? u - 1 : u;
     }
 
     @Test
