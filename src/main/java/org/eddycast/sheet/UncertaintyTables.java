@@ -15,17 +15,26 @@ public final class UncertaintyTables {
     private UncertaintyTables() {
     }
 
-    /** Each headline figure: its single run, Monte Carlo interval, input range and mean over the inputs. */
+    /**
+     * Each headline figure: its single run, Monte Carlo interval, input range, mean over the inputs, and how much
+     * of the range's variance is the sampled runs' own Monte Carlo noise rather than the inputs.
+     */
     public static SummaryContent.Table figures(UncertaintySummary u) {
         List<List<String>> rows = new ArrayList<>();
         for (FigureRange f : u.figures()) {
             rows.add(List.of(f.label(), SummaryContent.number(f.nominal()),
                     SummaryContent.number(f.mcLow()) + " to " + SummaryContent.number(f.mcHigh()),
                     SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95()),
-                    SummaryContent.number(f.mean()), f.unit()));
+                    SummaryContent.number(f.mean()), noise(f.noiseShare()), f.unit()));
         }
         return new SummaryContent.Table(List.of("figure", "single run", "Monte Carlo 95% interval",
-                "input range, 5th to 95th percentile", "mean over the inputs", "unit"), rows);
+                "input range, 5th to 95th percentile", "mean over the inputs", "share of the range from noise",
+                "unit"), rows);
+    }
+
+    /** The sampled runs' own noise as a share of the range's variance: "12%", or "n/a". */
+    static String noise(double share) {
+        return Double.isNaN(share) ? "n/a" : String.format(Locale.ROOT, "%.0f%%", 100 * share);
     }
 
     /**

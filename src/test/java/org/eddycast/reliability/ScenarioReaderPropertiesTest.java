@@ -50,9 +50,10 @@ class ScenarioReaderPropertiesTest {
      * syntax error's line and column.
      */
     private static final Pattern NAMES_A_FIELD_OR_LINE = Pattern.compile(
-            "(^line \\d+, column \\d+: .*)|(.*\\b(flow|substance|simulation|release|forecast)(\\.[A-Za-z]+)+\\b.*)"
-                    + "|(^(version|name|description|flow|substance|simulation|release|forecast)\\b.*)"
-                    + "|(^([A-Za-z0-9_.]+\\.)?([A-Za-z0-9_]+|\"[^\"]*\") is not used here.*)"
+            "(^line \\d+, column \\d+: .*)"
+                    + "|(.*\\b(flow|substance|simulation|release|forecast|uncertainty)(\\.[A-Za-z]+)+\\b.*)"
+                    + "|(^(version|name|description|flow|substance|simulation|release|forecast|uncertainty)\\b.*)"
+                    + "|(^([A-Za-z0-9_.\\[\\]]+\\.)?([A-Za-z0-9_]+|\"[^\"]*\") is not used here.*)"
                     + "|(^flow: .*)|(^a scenario must be a JSON object .*)", Pattern.DOTALL);
 
     private static List<String> presetTexts() {

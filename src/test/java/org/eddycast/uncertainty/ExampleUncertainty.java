@@ -42,7 +42,7 @@ public final class ExampleUncertainty {
         SampleSummary sample = SampleSummary.of(propagated);
         double nominal = blendTime(NOMINAL);
         FigureRange blend = new FigureRange("blendTime95", "95% blend time", "s", nominal, 0.97 * nominal,
-                1.03 * nominal, sample.mean(), sample.p05(), sample.p50(), sample.p95());
+                1.03 * nominal, sample.mean(), sample.p05(), sample.p50(), sample.p95(), 0.05);
         List<RangedInput> inputs = new ArrayList<>();
         List<SensitivityIndex> indices = new ArrayList<>();
         for (int i = 0; i < NAMES.size(); i++) {
