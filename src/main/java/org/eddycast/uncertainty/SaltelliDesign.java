@@ -24,8 +24,9 @@ import org.apache.commons.math3.random.SobolSequenceGenerator;
  * they are the same in every process.
  *
  * <p>Rows are numbered: [0, N) are A, [N, 2N) are B, then [(2 + i) N, (3 + i) N) are AB_i for i = 0..k-1.
- * A row's point is a pure function of (N, k, row), computed with integer operations and one exact division by
- * a power of two, so every process re-creates the same bits: a design split across machines stays one design.
+ * A row's point is a pure function of (N, k, row): integer operations, exact divisions by powers of two and one
+ * IEEE addition per coordinate (the rotation), so every process re-creates the same bits and a design split
+ * across machines stays one design.
  * The N points are generated once, on construction (N times 2k doubles).
  *
  * <p>Commons Math's direction numbers cover 1,000 dimensions, so at most 500 inputs.
