@@ -17,8 +17,15 @@ import org.eddycast.stats.AxisEstimate;
  *
  * @param text    the answer in one sentence
  * @param figures the figures behind it, the most important first
+ * @param howSure for a scenario with input ranges, how sure the answer is (both intervals of the main figure and
+ *                the input it is most sensitive to), in one line; empty otherwise
  */
-public record Headline(String text, List<Figure> figures) {
+public record Headline(String text, List<Figure> figures, String howSure) {
+
+    /** A headline without input ranges. */
+    public Headline(String text, List<Figure> figures) {
+        this(text, figures, "");
+    }
 
     /**
      * One labelled figure.
@@ -47,8 +54,8 @@ public record Headline(String text, List<Figure> figures) {
 
     /**
      * The headline of one study: the answer sentence of its question (the stations, the blend time, in the
-     * scenario's display units) when the result has one, then, for a scenario with input ranges, how sure it is
-     * (both intervals of the main figure and the input it is most sensitive to), with the figures below.
+     * scenario's display units) when the result has one, with how sure it is for a scenario with input ranges,
+     * and the figures below.
      */
     public static Headline of(StudyResult s) {
         Headline built = built(s);
@@ -56,11 +63,10 @@ public record Headline(String text, List<Figure> figures) {
         if (s.answers() != null && s.answers().headline() != null && !s.answers().headline().isBlank()) {
             text = s.answers().headline();
         }
-        if (s.uncertainty() != null) {
-            // how sure the answer is follows it at once, each interval named for what it covers
-            text += " " + UncertaintyText.headlineLine(s.uncertainty(), s.scenario().forecast().units());
-        }
-        return new Headline(text, built.figures());
+        // how sure the answer is follows it at once, each interval named for what it covers
+        String howSure = s.uncertainty() == null ? ""
+                : UncertaintyText.headlineLine(s.uncertainty(), s.scenario().forecast().units());
+        return new Headline(text, built.figures(), howSure);
     }
 
     private static Headline built(StudyResult s) {

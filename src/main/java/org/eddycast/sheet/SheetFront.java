@@ -30,6 +30,9 @@ public record SheetFront(String question, String answer, List<String> figures, L
     public static SheetFront of(StudyResult r, SummaryContent content, List<ChartSpec> charts) {
         Headline h = Headline.of(r);
         List<String> figures = new ArrayList<>();
+        if (!h.howSure().isEmpty()) {
+            figures.add(h.howSure());
+        }
         for (Headline.Figure f : h.figures()) {
             figures.add(capitalized(f.label()) + ": " + f.valueText());
         }

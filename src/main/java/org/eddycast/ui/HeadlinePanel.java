@@ -36,7 +36,7 @@ final class HeadlinePanel extends JPanel {
             caution.setVisible(false);
         } else {
             answer.setText(h.text());
-            StringBuilder sb = new StringBuilder();
+            StringBuilder sb = new StringBuilder(h.howSure());
             for (Headline.Figure f : h.figures()) {
                 if (sb.length() > 0) {
                     sb.append('\n');
