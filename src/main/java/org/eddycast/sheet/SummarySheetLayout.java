@@ -79,13 +79,19 @@ public final class SummarySheetLayout {
      */
     public SummarySheetLayout(SummaryContent content, SheetFront front, List<ChartSpec> charts,
                               UncertaintySummary uncertainty) {
+        this(content, front, charts, uncertainty, org.eddycast.scenario.DisplayUnits.si());
+    }
+
+    /** As the four-argument form, the uncertain figures in the scenario's display units. */
+    public SummarySheetLayout(SummaryContent content, SheetFront front, List<ChartSpec> charts,
+                              UncertaintySummary uncertainty, org.eddycast.scenario.DisplayUnits units) {
         ranking = uncertainty == null || uncertainty.sensitivity().isEmpty() ? null
                 : rankingChart(uncertainty, PAGE_WIDTH - 2 * MARGIN);
         advice = uncertainty == null ? "" : uncertainty.advice();
         if (uncertainty != null) {
             uncertaintySection.add(heading("Uncertain inputs: how wide the answer is, and which input to measure "
                     + "better"));
-            uncertaintySection.add(table(UncertaintyTables.figures(uncertainty), null, PAGE_WIDTH - 2 * MARGIN,
+            uncertaintySection.add(table(UncertaintyTables.figures(uncertainty, units), null, PAGE_WIDTH - 2 * MARGIN,
                     SMALL));
             if (ranking != null) {
                 uncertaintySection.add(ranking);

@@ -40,7 +40,8 @@ public final class SummarySheetPdf {
         SummaryContent content = SummaryContent.of(result);
         List<ChartSpec> charts = defaultCharts(result);
         return new SummarySheetLayout(content, SheetFront.of(result, content, charts), charts.subList(
-                Math.min(1, charts.size()), charts.size()), result.uncertainty());
+                Math.min(1, charts.size()), charts.size()), result.uncertainty(),
+                result.scenario().forecast().units());
     }
 
     /** The layout of a comparison sheet. */

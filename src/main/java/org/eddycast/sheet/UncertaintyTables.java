@@ -3,7 +3,9 @@ package org.eddycast.sheet;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.eddycast.engine.DisplayFormat;
 import org.eddycast.report.SummaryContent;
+import org.eddycast.scenario.DisplayUnits;
 import org.eddycast.uncertainty.UncertaintySummary;
 import org.eddycast.uncertainty.UncertaintySummary.FigureRange;
 import org.eddycast.uncertainty.UncertaintySummary.RangedInput;
@@ -20,16 +22,28 @@ public final class UncertaintyTables {
      * of the range's variance is the sampled runs' own Monte Carlo noise rather than the inputs.
      */
     public static SummaryContent.Table figures(UncertaintySummary u) {
+        return figures(u, DisplayUnits.si());
+    }
+
+    /** As {@link #figures(UncertaintySummary)}, each value in the scenario's display units with its unit. */
+    public static SummaryContent.Table figures(UncertaintySummary u, DisplayUnits units) {
+        DisplayFormat format = new DisplayFormat(units);
         List<List<String>> rows = new ArrayList<>();
         for (FigureRange f : u.figures()) {
-            rows.add(List.of(f.label(), SummaryContent.number(f.nominal()),
-                    SummaryContent.number(f.mcLow()) + " to " + SummaryContent.number(f.mcHigh()),
-                    SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95()),
-                    SummaryContent.number(f.mean()), noise(f.noiseShare()), f.unit()));
+            rows.add(List.of(f.label(), format.ofUnit(f.unit(), f.nominal()),
+                    range(format, f.unit(), f.mcLow(), f.mcHigh()), range(format, f.unit(), f.p05(), f.p95()),
+                    format.ofUnit(f.unit(), f.mean()), noise(f.noiseShare())));
         }
         return new SummaryContent.Table(List.of("figure", "single run", "Monte Carlo 95% interval",
-                "input range, 5th to 95th percentile", "mean over the inputs", "share of the range from noise",
-                "unit"), rows);
+                "input range, 5th to 95th percentile", "mean over the inputs", "share of the range from noise"),
+                rows);
+    }
+
+    private static String range(DisplayFormat format, String unit, double low, double high) {
+        if (!Double.isFinite(low) || !Double.isFinite(high)) {
+            return "none";
+        }
+        return format.ofUnit(unit, low) + " to " + format.ofUnit(unit, high);
     }
 
     /** The sampled runs' own noise as a share of the range's variance: "12%", or "n/a". */

@@ -220,8 +220,13 @@ final class ResultsView extends JPanel {
      * when the result has no uncertainty part (null).
      */
     void showUncertainty(UncertaintySummary u) {
+        showUncertainty(u, org.eddycast.scenario.DisplayUnits.si());
+    }
+
+    /** As {@link #showUncertainty(UncertaintySummary)}, the figures in the scenario's display units. */
+    void showUncertainty(UncertaintySummary u, org.eddycast.scenario.DisplayUnits units) {
         if (u != null) {
-            sensitivity.show(u);
+            sensitivity.show(u, units);
         }
         sensitivity.setVisible(u != null);
         revalidate();
@@ -382,7 +387,7 @@ final class ResultsView extends JPanel {
         headline.show(Headline.of(s), null);
         reasoning.setText(cautionsText(content.assumptions(), content.cautions()));
         reasoning.setCaretPosition(0);
-        showUncertainty(s.uncertainty());
+        showUncertainty(s.uncertainty(), s.scenario().forecast().units());
         List<String> warnings = new ArrayList<>(s.flow().warnings());
         warnings.addAll(r.warnings());
         qualityNotes.setText(warnings.isEmpty() ? "No warnings: the running estimate settled within the run."

@@ -47,9 +47,14 @@ final class SensitivityView extends JPanel {
 
     /** Shows a summary that carries sensitivity indices. */
     void show(UncertaintySummary u) {
+        show(u, org.eddycast.scenario.DisplayUnits.si());
+    }
+
+    /** Shows a summary, its figures in the scenario's display units. */
+    void show(UncertaintySummary u, org.eddycast.scenario.DisplayUnits units) {
         summary = u;
         drawChart();
-        figures.show(UncertaintyTables.figures(u));
+        figures.show(UncertaintyTables.figures(u, units));
         inputs.show(UncertaintyTables.inputs(u));
         List<String> lines = new ArrayList<>();
         lines.add(String.format(Locale.ROOT, "%d runs of %d particles each: a Saltelli design of %d base samples "

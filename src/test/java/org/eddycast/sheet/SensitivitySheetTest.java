@@ -57,9 +57,11 @@ class SensitivitySheetTest {
         String text = pdfText(layout, "sheet-sensitivity.pdf");
         assertTrue(text.contains("Uncertain inputs: how wide the answer is"), "the section heading");
         UncertaintySummary.FigureRange f = u.mainFigure();
-        assertTrue(text.contains(SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95())),
-                "the figure's input range");
-        assertTrue(text.contains(SummaryContent.number(f.mcLow()) + " to " + SummaryContent.number(f.mcHigh())),
+        org.eddycast.engine.DisplayFormat shown =
+                new org.eddycast.engine.DisplayFormat(result.scenario().forecast().units());
+        assertTrue(text.contains(shown.ofUnit(f.unit(), f.p05()) + " to " + shown.ofUnit(f.unit(), f.p95())),
+                "the figure's input range, in the display units");
+        assertTrue(text.contains(shown.ofUnit(f.unit(), f.mcLow()) + " to " + shown.ofUnit(f.unit(), f.mcHigh())),
                 "the figure's Monte Carlo interval beside it");
         if (layout.rankingPage() == 1) {
             assertTrue(layout.pageOneText().contains(u.advice()), "the advice stays on page 1");

@@ -76,8 +76,11 @@ class SensitivityTabTest {
                 view.sensitivity().chartPanel().getChart().getBackgroundPaint(), "the chart follows the theme"));
         UncertaintySummary.FigureRange f = u.mainFigure();
         List<String> figureRow = callEdt(() -> view.sensitivity().figureRows().get(0));
-        assertEquals(List.of(f.label(), SummaryContent.number(f.nominal())), figureRow.subList(0, 2));
-        assertEquals(SummaryContent.number(f.p05()) + " to " + SummaryContent.number(f.p95()), figureRow.get(3),
+        // in the scenario's display units, as the headline shows them
+        org.eddycast.engine.DisplayFormat shown =
+                new org.eddycast.engine.DisplayFormat(result.scenario().forecast().units());
+        assertEquals(List.of(f.label(), shown.ofUnit(f.unit(), f.nominal())), figureRow.subList(0, 2));
+        assertEquals(shown.ofUnit(f.unit(), f.p05()) + " to " + shown.ofUnit(f.unit(), f.p95()), figureRow.get(3),
                 "the input range");
         List<List<String>> inputs = callEdt(() -> view.sensitivity().inputRows());
         List<String> order = SensitivityChart.ranked(u).stream()
