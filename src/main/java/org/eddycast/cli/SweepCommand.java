@@ -106,6 +106,8 @@ final class SweepCommand implements Callable<Integer> {
         } finally {
             progress.finish();
         }
+        err.printf("sweep: the field stage was simulated %d times for these %d runs (the others share a "
+                + "dimensionless case)%n", plan.fieldSimulations(), to - from);
         Saves saves = new Saves(stdout);
         if (shard != null) {
             saves.save("sweep part", out, () -> SweepFiles.write(part, out));

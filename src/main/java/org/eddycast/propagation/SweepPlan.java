@@ -41,6 +41,7 @@ public final class SweepPlan {
     private final List<HeadlineFigure> figures;
     private final String fingerprint;
     private List<DimensionlessCase> cases;
+    private int fieldSimulations;
 
     /**
      * Plans the sweep of a scenario whose inputs carry ranges.
@@ -122,6 +123,14 @@ public final class SweepPlan {
         return fingerprint;
     }
 
+    /**
+     * The field-stage simulations the latest {@link #run} made: fewer than its rows where rows share a
+     * dimensionless case (an input that does not enter the field stage, such as the feed point).
+     */
+    public int fieldSimulations() {
+        return fieldSimulations;
+    }
+
     /** The rows of the sweep: the design's, then the centre. */
     public int rows() {
         return design.rows() + 1;
@@ -192,6 +201,7 @@ public final class SweepPlan {
             halfWidths[row - from] = widths;
         }
         progress.accept(1.0);
+        fieldSimulations = field.simulated();
         return new SweepPart(fingerprint, ScenarioWriter.text(scenario), design.baseSamples(), inputs(), figureKeys(),
                 rows(), from, responses, halfWidths);
     }

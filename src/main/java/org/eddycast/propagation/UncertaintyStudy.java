@@ -6,6 +6,7 @@ import org.eddycast.engine.StudyResult;
 import org.eddycast.particles.Cancellation;
 import org.eddycast.particles.RunListener;
 import org.eddycast.scenario.Scenario;
+import org.eddycast.uncertainty.UncertaintySummary;
 
 /**
  * A scenario's study with its inputs' uncertainty: the scenario's own run, then, when its inputs carry ranges,
@@ -35,7 +36,13 @@ public final class UncertaintyStudy {
                 (fraction, partial) -> listener.progress(share * fraction, partial), cancel);
         SweepPart all = plan.run(0, plan.rows(), threads,
                 fraction -> listener.progress(share + (1 - share) * fraction, null), cancel);
-        return nominal.withUncertainty(SweepSummary.summarise(plan, SweepSummary.merge(plan, List.of(all)), nominal));
+        UncertaintySummary u = SweepSummary.summarise(plan, SweepSummary.merge(plan, List.of(all)), nominal);
+        List<String> notes = new java.util.ArrayList<>(u.notes());
+        notes.add(String.format(java.util.Locale.ROOT, "the field stage was simulated %d times for the %d runs; the "
+                + "others share a dimensionless case with one of them and reuse it, rescaled", plan.fieldSimulations(),
+                plan.rows()));
+        return nominal.withUncertainty(new UncertaintySummary(u.inputs(), u.baseSamples(), u.runs(), u.particles(),
+                u.figures(), u.sensitivity(), u.advice(), notes));
     }
 
     /** The scenario's own run's share of the work, by particles followed. */

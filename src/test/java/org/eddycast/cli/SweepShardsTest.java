@@ -112,6 +112,16 @@ class SweepShardsTest {
             assertTrue(sensitivity.path(i - 1).path("total").asDouble() >= sensitivity.path(i).path("total")
                     .asDouble(), "ordered by total index");
         }
+        // the mean velocity does not enter the field stage: the rows that differ from A only in it reuse A's
+        // simulation (4 of the 21 runs here), and the notes say how many were simulated
+        String reuse = null;
+        for (JsonNode n : root.path("uncertainty").path("notes")) {
+            if (n.asText().startsWith("the field stage was simulated")) {
+                reuse = n.asText();
+            }
+        }
+        assertEquals("the field stage was simulated 17 times for the 21 runs; the others share a dimensionless case"
+                + " with one of them and reuse it, rescaled", reuse);
         // the mean velocity carries the tracer but does not enter the eddy diffusivity: its indices are zero
         for (JsonNode s : sensitivity) {
             if (s.path("input").asText().equals("flow.meanVelocity")) {
