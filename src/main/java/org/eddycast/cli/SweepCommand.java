@@ -1,8 +1,5 @@
 package org.eddycast.cli;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -16,6 +13,7 @@ import org.eddycast.propagation.SweepPart;
 import org.eddycast.propagation.SweepPlan;
 import org.eddycast.propagation.SweepSummary;
 import org.eddycast.report.UncertaintyJson;
+import org.eddycast.report.UncertaintyText;
 import org.eddycast.scenario.AtomicFiles;
 import org.eddycast.scenario.Scenario;
 import org.eddycast.scenario.ScenarioReader;
@@ -97,7 +95,7 @@ final class SweepCommand implements Callable<Integer> {
         int from = plan.shardStart(k, n);
         int to = plan.shardEnd(k, n);
         err.printf("sweep: %d inputs, %d runs in all; this %s runs rows %d to %d (%d runs)%n", plan.inputs().size(),
-                plan.design().rows(), shard == null ? "sweep" : "shard " + k + "/" + n, from, to - 1, to - from);
+                plan.rows(), shard == null ? "sweep" : "shard " + k + "/" + n, from, to - 1, to - from);
         err.flush();
         ProgressPrinter progress = ProgressPrinter.start(err);
         SweepPart part;
@@ -113,9 +111,9 @@ final class SweepCommand implements Callable<Integer> {
             saves.save("sweep part", out, () -> SweepFiles.write(part, out));
         } else {
             // the whole sweep goes through the same text a part does, so it equals any merge of its shards
-            String result = resultText(List.of(SweepFiles.parse(SweepFiles.text(part))));
-            stdout.print(summaryLine(result));
-            saves.save("sweep result", out, () -> AtomicFiles.writeString(out, result));
+            Merged result = merged(List.of(SweepFiles.parse(SweepFiles.text(part))));
+            stdout.print(result.summary());
+            saves.save("sweep result", out, () -> AtomicFiles.writeString(out, result.text()));
         }
         return saves.finish(err);
     }
@@ -126,44 +124,36 @@ final class SweepCommand implements Callable<Integer> {
             parts.add(SweepFiles.read(p));
         }
         new OutputPlan().output("--out", out).check();
-        String result;
+        Merged result;
         try {
-            result = resultText(parts);
+            result = merged(parts);
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), "cannot merge: " + e.getMessage());
         }
-        stdout.print(summaryLine(result));
+        stdout.print(result.summary());
         Saves saves = new Saves(stdout);
-        saves.save("sweep result", out, () -> AtomicFiles.writeString(out, result));
+        saves.save("sweep result", out, () -> AtomicFiles.writeString(out, result.text()));
         return saves.finish(spec.commandLine().getErr());
     }
 
-    /** The merged result of parts as JSON text: the same parts give the same text. */
-    static String resultText(List<SweepPart> parts) throws Exception {
+    /** The merged result of parts: the same parts give the same text. */
+    static Merged merged(List<SweepPart> parts) {
         if (parts.isEmpty()) {
             throw new IllegalArgumentException("no parts");
         }
         Scenario scenario = ScenarioReader.parse(parts.get(0).scenario());
         SweepPlan plan = new SweepPlan(scenario);
         UncertaintySummary u = SweepSummary.summarise(plan, SweepSummary.merge(plan, parts), null);
-        ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-        ObjectNode root = mapper.createObjectNode();
-        root.put("tool", "eddycast");
-        root.put("scenario", scenario.name());
-        root.put("fingerprint", plan.fingerprint());
-        UncertaintyJson.summary(root.putObject("uncertainty"), u);
-        UncertaintyJson.sensitivity(root, u);
-        org.eddycast.forecast.Cautions.ALL.forEach(root.putArray("cautions")::add);
-        return mapper.writeValueAsString(root) + "\n";
+        return new Merged(UncertaintyJson.sweepResult(scenario.name(), plan.fingerprint(), u),
+                UncertaintyText.resultLines(u, scenario.forecast().units()));
     }
 
-    private static String summaryLine(String result) throws Exception {
-        com.fasterxml.jackson.databind.JsonNode root = new ObjectMapper().readTree(result);
-        com.fasterxml.jackson.databind.JsonNode main = root.path("uncertainty").path("figures").path(0);
-        return String.format(java.util.Locale.ROOT, "%s (%s): 5-95%% over the inputs' ranges %.4g to %.4g%n%s%n",
-                main.path("label").asText(), main.path("unit").asText(),
-                main.path("inputRange").path("p05").asDouble(Double.NaN),
-                main.path("inputRange").path("p95").asDouble(Double.NaN),
-                root.path("uncertainty").path("advice").asText());
+    /**
+     * A merged sweep.
+     *
+     * @param text    the result file's JSON text
+     * @param summary what standard output says of it
+     */
+    record Merged(String text, String summary) {
     }
 }

@@ -40,6 +40,7 @@ public final class SweepPlan {
     private final SaltelliDesign design;
     private final List<HeadlineFigure> figures;
     private final String fingerprint;
+    private List<Scenario> scenarios;
     private List<DimensionlessCase> cases;
     private int fieldSimulations;
 
@@ -187,7 +188,7 @@ public final class SweepPlan {
             }
             int done = row - from;
             int count = to - from;
-            StudyResult r = Engine.run(scenarioAt(row), threads,
+            StudyResult r = Engine.run(scenarios.get(row), threads,
                     (fraction, partial) -> progress.accept((done + fraction) / count), cancel, true,
                     field.forRow(row));
             double[] values = new double[figures.size()];
@@ -217,10 +218,14 @@ public final class SweepPlan {
             return;
         }
         checkTails();
+        List<Scenario> sampled = new ArrayList<>(rows());
         List<DimensionlessCase> made = new ArrayList<>(rows());
         for (int row = 0; row < rows(); row++) {
-            made.add(Engine.dimensionlessCase(scenarioAt(row)));
+            Scenario s = scenarioAt(row);
+            sampled.add(s);
+            made.add(Engine.dimensionlessCase(s));
         }
+        scenarios = sampled;
         cases = made;
     }
 

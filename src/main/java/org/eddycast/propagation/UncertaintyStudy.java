@@ -37,12 +37,9 @@ public final class UncertaintyStudy {
         SweepPart all = plan.run(0, plan.rows(), threads,
                 fraction -> listener.progress(share + (1 - share) * fraction, null), cancel);
         UncertaintySummary u = SweepSummary.summarise(plan, SweepSummary.merge(plan, List.of(all)), nominal);
-        List<String> notes = new java.util.ArrayList<>(u.notes());
-        notes.add(String.format(java.util.Locale.ROOT, "the field stage was simulated %d times for the %d runs; the "
-                + "others share a dimensionless case with one of them and reuse it, rescaled", plan.fieldSimulations(),
-                plan.rows()));
-        return nominal.withUncertainty(new UncertaintySummary(u.inputs(), u.baseSamples(), u.runs(), u.particles(),
-                u.figures(), u.sensitivity(), u.advice(), notes));
+        return nominal.withUncertainty(u.withNote(String.format(java.util.Locale.ROOT, "the field stage was "
+                + "simulated %d times for the %d runs; the others share a dimensionless case with one of them and "
+                + "reuse it, rescaled", plan.fieldSimulations(), plan.rows())));
     }
 
     /** The scenario's own run's share of the work, by particles followed. */

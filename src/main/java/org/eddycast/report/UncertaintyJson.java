@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.Map;
+import org.eddycast.forecast.Cautions;
 import org.eddycast.uncertainty.UncertaintySummary;
 import org.eddycast.uncertainty.UncertaintySummary.FigureRange;
 import org.eddycast.uncertainty.UncertaintySummary.RangedInput;
@@ -39,6 +40,25 @@ public final class UncertaintyJson {
                 range.put("figure", f.key());
                 inputRange(range, f);
             }
+        }
+    }
+
+    /**
+     * A sweep's result file: the scenario's name, the sweep's fingerprint, the summary, the ranking and the
+     * cautions. Nothing in it depends on when or how the sweep was split, so merged shards give the same text.
+     */
+    public static String sweepResult(String scenario, String fingerprint, UncertaintySummary u) {
+        ObjectNode root = ResultJson.MAPPER.createObjectNode();
+        root.put("tool", "eddycast");
+        root.put("scenario", scenario);
+        root.put("fingerprint", fingerprint);
+        summary(root.putObject("uncertainty"), u);
+        sensitivity(root, u);
+        Cautions.ALL.forEach(root.putArray("cautions")::add);
+        try {
+            return ResultJson.MAPPER.writeValueAsString(root) + "\n";
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
         }
     }
 

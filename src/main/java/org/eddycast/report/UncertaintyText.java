@@ -31,6 +31,17 @@ public final class UncertaintyText {
         return line + ".";
     }
 
+    /**
+     * What a sweep's result says in two lines: the main figure's range over the inputs (the sweep has no single
+     * run of its own beside it) and the advice.
+     */
+    public static String resultLines(UncertaintySummary u, DisplayUnits units) {
+        FigureRange m = u.mainFigure();
+        DisplayFormat f = new DisplayFormat(units);
+        return String.format(Locale.ROOT, "%s over the inputs' ranges, 5-95%%: %s, median %s%n%s%n", m.label(),
+                interval(f, m.unit(), m.p05(), m.p95()), value(f, m.unit(), m.p50()), u.advice());
+    }
+
     /** Appends the block that follows the answers. */
     public static void append(StringBuilder sb, UncertaintySummary u, DisplayUnits units) {
         DisplayFormat f = new DisplayFormat(units);

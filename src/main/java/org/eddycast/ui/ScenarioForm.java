@@ -543,43 +543,13 @@ public final class ScenarioForm extends JPanel {
                 }
                 case RANGES -> {
                     javax.swing.JTextArea a = new javax.swing.JTextArea(4, 24);
-                    a.getDocument().addDocumentListener(new DocumentListener() {
-                        @Override
-                        public void insertUpdate(DocumentEvent e) {
-                            changed();
-                        }
-
-                        @Override
-                        public void removeUpdate(DocumentEvent e) {
-                            changed();
-                        }
-
-                        @Override
-                        public void changedUpdate(DocumentEvent e) {
-                            changed();
-                        }
-                    });
+                    recheckOnEdit(a);
                     a.putClientProperty("JTextArea.placeholderText", "flow.bedSlope +-25%   # why");
                     yield a;
                 }
                 default -> {
                     JTextField f = new JTextField(12);
-                    f.getDocument().addDocumentListener(new DocumentListener() {
-                        @Override
-                        public void insertUpdate(DocumentEvent e) {
-                            changed();
-                        }
-
-                        @Override
-                        public void removeUpdate(DocumentEvent e) {
-                            changed();
-                        }
-
-                        @Override
-                        public void changedUpdate(DocumentEvent e) {
-                            changed();
-                        }
-                    });
+                    recheckOnEdit(f);
                     if (spec.optional()) {
                         f.putClientProperty("JTextField.placeholderText", "optional");
                     }
@@ -706,6 +676,26 @@ public final class ScenarioForm extends JPanel {
         void clearIfEmpty() {
             // fields of other routes keep what the user typed there
         }
+    }
+
+    /** Checks the form again after every edit of a text field or area. */
+    private void recheckOnEdit(javax.swing.text.JTextComponent field) {
+        field.getDocument().addDocumentListener(new DocumentListener() {
+            @Override
+            public void insertUpdate(DocumentEvent e) {
+                changed();
+            }
+
+            @Override
+            public void removeUpdate(DocumentEvent e) {
+                changed();
+            }
+
+            @Override
+            public void changedUpdate(DocumentEvent e) {
+                changed();
+            }
+        });
     }
 
     /** A number as a person would write it: no trailing zeros, exponent only for very small or large values. */

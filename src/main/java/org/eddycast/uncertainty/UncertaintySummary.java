@@ -27,6 +27,13 @@ public record UncertaintySummary(List<RangedInput> inputs, int baseSamples, int 
         notes = List.copyOf(notes);
     }
 
+    /** The same summary with one more note. */
+    public UncertaintySummary withNote(String note) {
+        List<String> more = new java.util.ArrayList<>(notes);
+        more.add(note);
+        return new UncertaintySummary(inputs, baseSamples, runs, particles, figures, sensitivity, advice, more);
+    }
+
     /** The figure the sensitivity indices are for. */
     public FigureRange mainFigure() {
         return figures.get(0);

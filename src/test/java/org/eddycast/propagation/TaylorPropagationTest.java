@@ -69,8 +69,9 @@ class TaylorPropagationTest {
         double p95 = Math.exp(mu + s * z.inverseCumulativeProbability(0.95));
 
         // tolerances: three standard errors of independent sampling (sd / sqrt(n) for the mean; sqrt(p (1 - p) / n)
-        // over the density at the quantile for a percentile, Kendall & Stuart); the quasi-random design does at
-        // least as well as independent sampling, so these bound it
+        // over the density at the quantile for a percentile: Kendall & Stuart, The Advanced Theory of Statistics,
+        // vol. 1, from memory); the quasi-random design does at least as well as independent sampling, so these
+        // bound it
         assertEquals(mean, sample.mean(), 3 * sd / Math.sqrt(n), "mean");
         assertEquals(p05, sample.p05(), 3 * quantileError(0.05, p05, mu, s, n), "5th percentile");
         assertEquals(p95, sample.p95(), 3 * quantileError(0.95, p95, mu, s, n), "95th percentile");
